@@ -1,0 +1,148 @@
+package org.trendwright.core.selection;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+import org.trendwright.core.InsufficientDataException;
+import org.trendwright.core.ModelException;
+import org.trendwright.core.Observations;
+import org.trendwright.core.TestResult;
+import org.trendwright.core.forecast.Forecast;
+import org.trendwright.core.forecast.ForecastPoint;
+
+/**
+ * Honest model choice: every candidate is judged on periods it was not fitted to.
+ *
+ * <ol>
+ *   <li><b>Holdout</b>: fit to all but the last H periods, forecast them 1..H steps ahead.</li>
+ *   <li><b>Rolling origin</b> (Tashman 2000, "Out-of-sample tests of forecasting accuracy",
+ *       International Journal of Forecasting 16, 437-450): the training sample ends in turn at
+ *       each of the last O origins; each forecasts up to H steps as far as the data go; errors are
+ *       pooled. Its RMSE ranks the candidates, because it averages over more forecasts than a
+ *       single holdout.</li>
+ *   <li><b>Residual checks</b> on the full-sample fit: a candidate whose residuals fail a check
+ *       has intervals that cannot be trusted as stated, so the recommendation prefers the best
+ *       candidate that passes, and says so plainly when none does.</li>
+ *   <li><b>Information criteria</b> AIC and BIC on the original scale of y (the Jacobian term puts
+ *       log models on it), shown for candidates fitted to the same observations.</li>
+ *   <li><b>Diebold-Mariano</b> between the two best candidates' one-step errors at the rolling
+ *       origins.</li>
+ * </ol>
+ *
+ * <p>Stateless and thread-safe.
+ */
+public final class ModelSelection {
+
+    private ModelSelection() {
+    }
+
+    /** Compares the candidates on the series and recommends one. */
+    public static ModelComparison compare(Observations series, List<Candidate> candidates, ComparisonSpec spec) {
+        int minimumTraining = series.size() - spec.holdout() - spec.origins() + 1;
+        if (minimumTraining < 3) {
+            throw InsufficientDataException.forModel("A comparison with a " + spec.holdout() + "-period holdout and "
+                    + spec.origins() + " forecast origins", spec.holdout() + spec.origins() + 2, series.size());
+        }
+        List<CandidateAssessment> assessments = new ArrayList<>();
+        for (Candidate candidate : candidates) {
+            assessments.add(assess(series, candidate, spec));
+        }
+        assessments.sort(Comparator.comparing(CandidateAssessment::evaluated).reversed()
+                .thenComparingDouble(CandidateAssessment::score));
+        return recommend(series, assessments, spec);
+    }
+
+    private static CandidateAssessment assess(Observations series, Candidate candidate, ComparisonSpec spec) {
+        try {
+            CandidateFit full = candidate.fit(series);
+            List<TestResult> checks = full.residualChecks();
+            boolean passes = checks.stream().noneMatch(c -> c.pValue() < spec.level());
+            int k = full.parameters();
+            double ll = full.logLikelihood();
+            return new CandidateAssessment(candidate.name(), Optional.empty(), -2 * ll + 2 * k,
+                    -2 * ll + Math.log(full.observationsUsed()) * k, full.observationsUsed(),
+                    Optional.of(holdout(series, candidate, spec)), Optional.of(rollingOrigin(series, candidate, spec)),
+                    oneStepErrors(series, candidate, spec), checks, passes);
+        } catch (ModelException e) {
+            return CandidateAssessment.failed(candidate.name(), e.getMessage());
+        }
+    }
+
+    private static AccuracyMeasures holdout(Observations series, Candidate candidate, ComparisonSpec spec) {
+        Observations training = series.head(series.size() - spec.holdout());
+        Errors errors = forecastErrors(series, training, candidate, spec, spec.holdout());
+        return AccuracyMeasures.of(errors.actual(), errors.forecast(), AccuracyMeasures.seasonalNaiveScale(training));
+    }
+
+    private static AccuracyMeasures rollingOrigin(Observations series, Candidate candidate, ComparisonSpec spec) {
+        Errors pooled = new Errors(new double[0], new double[0]);
+        double scale = AccuracyMeasures.seasonalNaiveScale(series.head(series.size() - spec.origins()));
+        for (int end = series.size() - spec.origins(); end < series.size(); end++) {
+            pooled = pooled.append(forecastErrors(series, series.head(end), candidate, spec, spec.holdout()));
+        }
+        return AccuracyMeasures.of(pooled.actual(), pooled.forecast(), scale);
+    }
+
+    private static double[] oneStepErrors(Observations series, Candidate candidate, ComparisonSpec spec) {
+        double[] errors = new double[spec.origins()];
+        for (int o = 0; o < spec.origins(); o++) {
+            int end = series.size() - spec.origins() + o;
+            Errors e = forecastErrors(series, series.head(end), candidate, spec, 1);
+            errors[o] = e.actual()[0] - e.forecast()[0];
+        }
+        return errors;
+    }
+
+    /**
+     * Fits to {@code training} and forecasts the observed periods after it, up to {@code steps}
+     * observations ahead (a gap in the series is forecast through, not scored).
+     */
+    private static Errors forecastErrors(Observations series, Observations training, Candidate candidate,
+                                         ComparisonSpec spec, int steps) {
+        int first = training.size();
+        int last = Math.min(series.size(), first + steps);
+        int horizon = series.timeAt(last - 1) - training.lastTime();
+        Forecast forecast = candidate.fit(training).forecast(horizon, spec.levels());
+        double[] actual = new double[last - first];
+        double[] predicted = new double[last - first];
+        for (int i = first; i < last; i++) {
+            ForecastPoint point = forecast.points().get(series.timeAt(i) - training.lastTime() - 1);
+            actual[i - first] = series.valueAt(i);
+            predicted[i - first] = point.value();
+        }
+        return new Errors(actual, predicted);
+    }
+
+    private static ModelComparison recommend(Observations series, List<CandidateAssessment> ranked,
+                                             ComparisonSpec spec) {
+        List<CandidateAssessment> evaluated = ranked.stream().filter(CandidateAssessment::evaluated).toList();
+        if (evaluated.isEmpty()) {
+            return new ModelComparison(spec, ranked, Optional.empty(),
+                    List.of("No candidate model could be fitted to this series; see each candidate's reason."),
+                    true, Optional.empty());
+        }
+        Optional<CandidateAssessment> bestPassing = evaluated.stream().filter(CandidateAssessment::passesChecks)
+                .findFirst();
+        CandidateAssessment chosen = bestPassing.orElse(evaluated.get(0));
+        Optional<TestResult> dm = evaluated.size() < 2 ? Optional.empty()
+                : Optional.of(DieboldMariano.test(evaluated.get(0).name(), evaluated.get(0).oneStepErrors(),
+                        evaluated.get(1).name(), evaluated.get(1).oneStepErrors(), 1, spec.level()));
+        List<String> reasons = Recommendation.reasons(chosen, evaluated, bestPassing.isPresent(), dm);
+        return new ModelComparison(spec, ranked, Optional.of(chosen.name()), reasons, bestPassing.isEmpty(), dm);
+    }
+
+    /** Aligned actual and forecast values. */
+    private record Errors(double[] actual, double[] forecast) {
+
+        Errors append(Errors more) {
+            return new Errors(concat(actual, more.actual), concat(forecast, more.forecast));
+        }
+
+        private static double[] concat(double[] a, double[] b) {
+            double[] all = java.util.Arrays.copyOf(a, a.length + b.length);
+            System.arraycopy(b, 0, all, a.length, b.length);
+            return all;
+        }
+    }
+}

@@ -1,0 +1,66 @@
+package org.trendwright.core.selection;
+
+import java.util.List;
+import java.util.function.Function;
+import org.trendwright.core.Observations;
+import org.trendwright.core.TestResult;
+import org.trendwright.core.forecast.Forecast;
+import org.trendwright.core.trend.TrendFit;
+import org.trendwright.core.trend.TrendSpec;
+import org.trendwright.core.trend.Trends;
+
+/**
+ * A trend model as a comparison candidate.
+ *
+ * @param spec           the trend model
+ * @param residualChecks the checks its fit must pass (applied to each full-sample fit)
+ */
+public record TrendCandidate(TrendSpec spec, Function<TrendFit, List<TestResult>> residualChecks)
+        implements Candidate {
+
+    @Override
+    public String name() {
+        return spec.description();
+    }
+
+    @Override
+    public CandidateFit fit(Observations training) {
+        TrendFit fit = Trends.fit(training, spec);
+        return new Fitted(fit, residualChecks);
+    }
+
+    private record Fitted(TrendFit fit, Function<TrendFit, List<TestResult>> checks) implements CandidateFit {
+
+        @Override
+        public Forecast forecast(int horizon, List<Double> levels) {
+            return fit.forecast(horizon, levels).forecast();
+        }
+
+        /** For ln y the Jacobian term -sum ln y_i puts the likelihood on the scale of y. */
+        @Override
+        public double logLikelihood() {
+            double jacobian = 0;
+            if (fit.spec().logScale()) {
+                for (double y : fit.ols().y()) {
+                    jacobian -= y; // y here is ln y: the fit was on the log scale
+                }
+            }
+            return fit.ols().logLikelihood() + jacobian;
+        }
+
+        @Override
+        public int parameters() {
+            return fit.ols().coefficients().size() + 1;
+        }
+
+        @Override
+        public int observationsUsed() {
+            return fit.series().size();
+        }
+
+        @Override
+        public List<TestResult> residualChecks() {
+            return checks.apply(fit);
+        }
+    }
+}
