@@ -96,7 +96,7 @@ class SeriesIntakeApiTest {
                     .body("series[0].name", equalTo("Kettles")).extract().path("series[0].id").toString();
             server.given().get("/api/series/" + id).then().statusCode(200)
                     .body("observations.period", equalTo(List.of("2024-Q1", "2024-Q2")))
-                    .body("observations.value", equalTo(List.of(10.5f, 11.0f)));
+                    .body("observations.value", equalTo(List.of(10.5, 11.0)));
         }
     }
 

@@ -1,6 +1,8 @@
 package org.trendwright.testing;
 
 import io.restassured.RestAssured;
+import io.restassured.config.JsonConfig;
+import io.restassured.path.json.config.JsonPathConfig.NumberReturnType;
 import io.restassured.specification.RequestSpecification;
 import java.nio.file.Path;
 import java.time.Clock;
@@ -54,9 +56,10 @@ public final class RunningServer implements AutoCloseable {
         start();
     }
 
-    /** A REST Assured request aimed at this server. */
+    /** A REST Assured request aimed at this server; JSON numbers are read as doubles. */
     public RequestSpecification given() {
-        return RestAssured.given().baseUri("http://127.0.0.1").port(app.port()).urlEncodingEnabled(true);
+        return RestAssured.given().baseUri("http://127.0.0.1").port(app.port())
+                .config(RestAssured.config().jsonConfig(JsonConfig.jsonConfig().numberReturnType(NumberReturnType.DOUBLE)));
     }
 
     public int port() {
