@@ -23,7 +23,7 @@ import org.trendwright.series.SeriesInput;
  * Reads the series of an upload by its content type: application/json, text/csv (also
  * text/plain, text/tab-separated-values, application/csv) as the raw body, or multipart/form-data
  * with the CSV file in the part named {@code file}. Query parameters: {@code missing=refuse|gap},
- * {@code delimiter=comma|semicolon|tab}, {@code name} (for a CSV without header). Thread-safe.
+ * {@code delimiter=comma|semicolon|tab}, {@code name} (for a CSV without header, or one with a single series column). Thread-safe.
  */
 final class Uploads {
 

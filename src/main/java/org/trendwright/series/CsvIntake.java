@@ -23,7 +23,7 @@ import org.trendwright.series.IntakeException.Reason;
  * <ul>
  *   <li>wide: the first column holds periods and every further column is one series, named by
  *       the header (without a header: the request's name, else "series", numbered when there are
- *       several);</li>
+ *       several; a request's name also replaces the header of a file with a single series column);</li>
  *   <li>long: exactly three columns, series name, period, value; creates one series per name.</li>
  * </ul>
  * The first row is a header when its period cell is not a period. Numbers use a decimal point.

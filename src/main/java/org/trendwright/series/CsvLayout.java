@@ -67,7 +67,8 @@ record CsvLayout(boolean longFormat, boolean hasHeader) {
         List<String> names = new ArrayList<>(count);
         Set<String> seen = new HashSet<>();
         for (int column = 1; column <= count; column++) {
-            String name = hasHeader ? header.cell(column) : defaultName(options, column, count);
+            boolean named = options.name() != null && !options.name().isBlank();
+            String name = hasHeader && !(named && count == 1) ? header.cell(column) : defaultName(options, column, count);
             if (name.isBlank()) {
                 throw new IntakeException(Reason.INVALID_VALUE, header.where(column), "the header gives column "
                         + (column + 1) + " no name; name every series column.");
