@@ -90,8 +90,8 @@ public final class PeriodColumn {
         if (days == 7 && oneWeekday) {
             return Frequency.WEEKLY;
         }
-        throw ambiguous(first, "the closest two dates are " + days + " days apart, which fits no daily or weekly"
-                + " series");
+        throw ambiguous(first, days == 7 ? "the dates are a week apart but fall on different weekdays"
+                : "the closest two dates are " + days + " days apart, which fits no daily or weekly series");
     }
 
     private static Frequency monthlyOrCoarser(TreeSet<LocalDate> dates, boolean ends, Where first) {
