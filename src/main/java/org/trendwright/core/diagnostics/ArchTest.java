@@ -44,15 +44,9 @@ public final class ArchTest {
      */
     public static ArchTestResult test(double[] residuals, int order, double level) {
         TestResult.checkLevel(level);
-        if (order < 1) {
-            throw new InvalidSpecificationException("The ARCH test order must be at least 1, got " + order + ".");
-        }
-        int n = residuals.length;
-        if (n < 2 * order + 2) {
-            throw new InsufficientDataException("The ARCH test of order " + order + " needs at least "
-                    + (2 * order + 2) + " residuals but got " + n + "; supply a longer series or test a lower order.");
-        }
+        checkOrder(order, residuals.length);
         ResidualAutocorrelations.requireUsable(residuals, 2 * order + 2, "The ARCH test");
+        int n = residuals.length;
         double[] squares = scaledSquares(residuals);
         double[] response = Arrays.copyOfRange(squares, order, n);
         requireVariation(response, order);
@@ -66,6 +60,16 @@ public final class ArchTest {
                 "The residual variance does not depend on the last " + order + " squared residuals", lm,
                 "chi-square", List.of((double) order), p, level, TestResult.decide(p, level), reading(p < level));
         return new ArchTestResult(order, rows, rSquared, result);
+    }
+
+    private static void checkOrder(int order, int n) {
+        if (order < 1) {
+            throw new InvalidSpecificationException("The ARCH test order must be at least 1, got " + order + ".");
+        }
+        if (n < 2 * order + 2) {
+            throw new InsufficientDataException("The ARCH test of order " + order + " needs at least "
+                    + (2 * order + 2) + " residuals but got " + n + "; supply a longer series or test a lower order.");
+        }
     }
 
     /** (e_t / max|e|)^2: same R^2 as e_t^2, no overflow. */
