@@ -1,0 +1,36 @@
+package org.trendwright.core.breaks;
+
+import org.trendwright.core.TestResult;
+
+/**
+ * The outcome of a search for one break at an unknown row ({@link SupFTest}). Immutable and
+ * thread-safe: array accessors return copies.
+ *
+ * @param test           the sup-F test: statistic sup F, p-value from Andrews' (1993) limit
+ * @param breakRow       the candidate m with the largest Chow F, the most likely break: the new
+ *                       regime starts at row m + 1 (counting rows from 1)
+ * @param candidateRows  every break row m searched, in increasing order
+ * @param fStatistics    the Chow F statistic at each candidate row, for charting
+ */
+public record BreakSearch(TestResult test, int breakRow, int[] candidateRows, double[] fStatistics) {
+
+    public BreakSearch {
+        candidateRows = candidateRows.clone();
+        fStatistics = fStatistics.clone();
+    }
+
+    @Override
+    public int[] candidateRows() {
+        return candidateRows.clone();
+    }
+
+    @Override
+    public double[] fStatistics() {
+        return fStatistics.clone();
+    }
+
+    /** The largest Chow F over the candidates, the test statistic. */
+    public double supF() {
+        return test.statistic();
+    }
+}

@@ -1,0 +1,192 @@
+package org.trendwright.core.gls;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.trendwright.core.InsufficientDataException;
+import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.diagnostics.DurbinWatson;
+import org.trendwright.core.regression.Design;
+import org.trendwright.core.regression.LeastSquares;
+import org.trendwright.core.regression.OlsFit;
+
+/**
+ * Iterated feasible GLS for a regression y = X b + u whose errors follow a stationary AR(1),
+ * u_t = rho u_{t-1} + e_t with |rho| < 1 and e_t white noise.
+ *
+ * <p>Lagging the model once and subtracting rho times it removes the correlation:
+ * y_t - rho y_{t-1} = (x_t - rho x_{t-1})'b + e_t. Since rho is unknown, iterate (Cochrane &amp;
+ * Orcutt 1949, "Application of least squares regression to relationships containing
+ * auto-correlated error terms", JASA 44):
+ * <ol>
+ *   <li>fit OLS and take its residuals u;</li>
+ *   <li>estimate rho by regressing u_t on u_{t-1} without a constant ({@link RhoEstimate});</li>
+ *   <li>quasi-difference: y*_t = y_t - rho y_{t-1}, x*_t = x_t - rho x_{t-1} for t = 2..n (the
+ *       constant column becomes 1 - rho, so b stays on the original regressors' scale);
+ *       Prais &amp; Winsten (1954, Cowles Commission Discussion Paper 383) also keep t = 1 as
+ *       y*_1 = sqrt(1 - rho^2) y_1, x*_1 = sqrt(1 - rho^2) x_1;</li>
+ *   <li>fit OLS to the transformed data, recompute u = y - X b on the original data, and go back
+ *       to step 2 until rho changes by less than the tolerance or the iteration cap is reached.</li>
+ * </ol>
+ * The iteration is a fixed-point search; it usually converges in a handful of steps, but it can
+ * stall or (rarely) settle on a local solution, so the result reports honestly whether it
+ * converged.
+ *
+ * <p>Rows must be consecutive periods in time order with no gaps; the caller guarantees that.
+ * When the transformed regression fits exactly, the standard errors are 0 and the Durbin-Watson
+ * statistic is NaN (0/0); every other failure is an exception listed on {@link #fit}.
+ * Stateless and thread-safe.
+ */
+public final class Ar1Gls {
+
+    /** Stop when successive rho estimates differ by less than this. */
+    public static final double DEFAULT_TOLERANCE = 1e-8;
+    /** The most transformed regressions fitted before giving up on convergence. */
+    public static final int DEFAULT_MAX_ITERATIONS = 100;
+    /** Residuals below this fraction of the data's size are read as an exact fit. */
+    private static final double EXACT_FIT = 1e-12;
+
+    private Ar1Gls() {
+    }
+
+    /** Iterated Cochrane-Orcutt with the default tolerance and iteration cap. */
+    public static Ar1GlsFit cochraneOrcutt(Design design, double[] y) {
+        return fit(design, y, Ar1Method.COCHRANE_ORCUTT, DEFAULT_TOLERANCE, DEFAULT_MAX_ITERATIONS);
+    }
+
+    /** Iterated Prais-Winsten with the default tolerance and iteration cap. */
+    public static Ar1GlsFit praisWinsten(Design design, double[] y) {
+        return fit(design, y, Ar1Method.PRAIS_WINSTEN, DEFAULT_TOLERANCE, DEFAULT_MAX_ITERATIONS);
+    }
+
+    /**
+     * Fits y = X b + u with AR(1) errors by the iteration described in the class comment.
+     *
+     * @throws InsufficientDataException     when n &lt; k + 2 or n &lt; 3 (after the first row is lost
+     *                                       to the quasi-difference, a transformed regression and the
+     *                                       rho regression each need a residual degree of freedom)
+     * @throws InvalidSpecificationException when a rho estimate is not inside (-1, 1) or is
+     *                                       undefined because the regression fits exactly; when
+     *                                       the tolerance is not positive or the cap is below 1;
+     *                                       when y has the wrong length or a non-finite value
+     * @throws org.trendwright.core.RankDeficientDesignException when the (transformed) regressors
+     *                                       are linearly dependent
+     */
+    public static Ar1GlsFit fit(Design design, double[] y, Ar1Method method, double tolerance, int maxIterations) {
+        checkOptions(tolerance, maxIterations);
+        checkSize(design, method);
+        OlsFit ols = LeastSquares.fit(design, y);
+        checkNoise(ols, y);
+        RhoEstimate rho = stationary(RhoEstimate.fromResiduals(ols.residuals()), 0);
+        for (int iteration = 1; ; iteration++) {
+            OlsFit transformed = LeastSquares.fit(transform(design, rho.value(), method),
+                    transform(y, rho.value(), method));
+            double[] structural = structuralResiduals(design, y, transformed.estimates());
+            RhoEstimate next = RhoEstimate.fromResiduals(structural);
+            boolean converged = Math.abs(next.value() - rho.value()) < tolerance;
+            if (converged || iteration == maxIterations) {
+                return result(method, rho, iteration, converged, transformed, structural, design);
+            }
+            rho = stationary(next, iteration);
+        }
+    }
+
+    private static void checkOptions(double tolerance, int maxIterations) {
+        if (!(tolerance > 0) || maxIterations < 1) {
+            throw new InvalidSpecificationException("The GLS iteration needs a positive tolerance and at least one"
+                    + " iteration, got tolerance " + tolerance + " and cap " + maxIterations + "; the defaults are "
+                    + DEFAULT_TOLERANCE + " and " + DEFAULT_MAX_ITERATIONS + ".");
+        }
+    }
+
+    private static void checkSize(Design design, Ar1Method method) {
+        int needed = Math.max(3, design.width() + 2);
+        if (design.rows() < needed) {
+            throw InsufficientDataException.forModel(method.label() + " GLS on " + design.width() + " regressors",
+                    needed, design.rows());
+        }
+    }
+
+    /**
+     * Refuses a regression that fits exactly: its residuals are rounding noise (RSS at most
+     * EXACT_FIT^2 times sum y^2, i.e. residuals about 1e-12 of the data), whose correlation means
+     * nothing.
+     */
+    private static void checkNoise(OlsFit ols, double[] y) {
+        double squares = 0;
+        for (double v : y) {
+            squares += v * v;
+        }
+        if (ols.residualSumOfSquares() <= EXACT_FIT * EXACT_FIT * squares) {
+            throw new InvalidSpecificationException("The regression fits the data exactly (the residuals are"
+                    + " rounding noise), so there is no error autocorrelation to estimate; use the OLS fit.");
+        }
+    }
+
+    /** Refuses a rho that is undefined or outside (-1, 1); {@code step} 0 means from the OLS residuals. */
+    private static RhoEstimate stationary(RhoEstimate rho, int step) {
+        String source = step == 0 ? "the OLS residuals" : "the residuals of GLS iteration " + step;
+        if (Double.isNaN(rho.value())) {
+            throw new InvalidSpecificationException("The error autocorrelation cannot be estimated from " + source
+                    + ": all but the last residual are 0, so there is no error left to model; use OLS.");
+        }
+        if (Math.abs(rho.value()) >= 1) {
+            throw new InvalidSpecificationException("The error autocorrelation estimated from " + source + " is "
+                    + rho.value() + ", not inside (-1, 1): the errors look non-stationary (a random walk or"
+                    + " worse), and quasi-differencing cannot fix that; model the period-to-period differences"
+                    + " of the series instead.");
+        }
+        return rho;
+    }
+
+    /** The quasi-differenced design; no longer "with intercept", since the constant becomes 1 - rho. */
+    static Design transform(Design design, double rho, Ar1Method method) {
+        List<double[]> columns = new ArrayList<>(design.width());
+        for (int j = 0; j < design.width(); j++) {
+            columns.add(transform(design.column(j), rho, method));
+        }
+        return new Design(columns, design.names(), false);
+    }
+
+    /** v*_t = v_t - rho v_{t-1}, t = 2..n, preceded for Prais-Winsten by v*_1 = sqrt(1 - rho^2) v_1. */
+    static double[] transform(double[] v, double rho, Ar1Method method) {
+        int offset = method == Ar1Method.PRAIS_WINSTEN ? 1 : 0;
+        double[] out = new double[method.transformedRows(v.length)];
+        if (offset == 1) {
+            out[0] = Math.sqrt(1 - rho * rho) * v[0];
+        }
+        for (int t = 1; t < v.length; t++) {
+            out[t - 1 + offset] = v[t] - rho * v[t - 1];
+        }
+        return out;
+    }
+
+    private static double[] structuralResiduals(Design design, double[] y, double[] b) {
+        double[] u = new double[y.length];
+        for (int i = 0; i < y.length; i++) {
+            double fitted = 0;
+            for (int j = 0; j < b.length; j++) {
+                fitted = Math.fma(design.get(i, j), b[j], fitted);
+            }
+            u[i] = y[i] - fitted;
+        }
+        return u;
+    }
+
+    private static Ar1GlsFit result(Ar1Method method, RhoEstimate rho, int iterations, boolean converged,
+                                    OlsFit transformed, double[] structural, Design design) {
+        double[][] covariance = transformed.xtxInverse();
+        double variance = transformed.residualVariance();
+        for (double[] row : covariance) {
+            for (int j = 0; j < row.length; j++) {
+                row[j] *= variance;
+            }
+        }
+        double[] last = new double[design.width()];
+        for (int j = 0; j < last.length; j++) {
+            last[j] = design.get(design.rows() - 1, j);
+        }
+        return new Ar1GlsFit(method, rho, iterations, converged, transformed.coefficients(), covariance,
+                transformed.standardErrorOfEstimate(), transformed.residualDegreesOfFreedom(),
+                DurbinWatson.statistic(transformed.residuals()), structural, transformed.residuals(), last);
+    }
+}
