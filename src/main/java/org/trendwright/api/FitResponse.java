@@ -15,12 +15,29 @@ import java.util.List;
  * @param coefficients the estimated coefficients with their inference
  * @param statistics   goodness of fit and information criteria
  * @param growthRate   for a log-linear trend, the growth per period; null otherwise
+ * @param tests        residual tests, each with its decision and a plain reading
+ * @param robust       Newey-West (HAC) standard errors, or null when they could not be computed
+ * @param notes        why a check is missing (gaps, too few observations), in plain words
  * @param forecast     one row per future period
  * @param chart        actual, fitted, residuals and forecast bands, aligned by period
  */
-public record FitResponse(SeriesRef series, ModelSpec model, int horizon, List<Double> levels, String description,
-                          List<CoefficientRow> coefficients, Statistics statistics, Growth growthRate,
-                          List<ForecastRow> forecast, Chart chart) {
+public record FitResponse(SeriesRef series, ModelSpec model, int horizon, List<Double> levels,
+                          double significanceLevel, String description, List<CoefficientRow> coefficients,
+                          Statistics statistics, Growth growthRate, List<Test> tests, Robust robust,
+                          List<String> notes, List<ForecastRow> forecast, Chart chart) {
+
+    /**
+     * One hypothesis test as the core reports it; {@code decision} is "reject" or "do-not-reject"
+     * at {@code level}, and {@code reading} says in one sentence what it means for the forecast.
+     */
+    public record Test(String test, String nullHypothesis, double statistic, String distribution,
+                       List<Double> degreesOfFreedom, double pValue, double level, String decision,
+                       String reading) {
+    }
+
+    /** Coefficients with heteroskedasticity- and autocorrelation-consistent standard errors. */
+    public record Robust(String method, int lag, String lagRule, List<CoefficientRow> coefficients) {
+    }
 
     /** The fitted data. */
     public record SeriesRef(Long id, Integer version, String name, String frequency, int periodsPerYear,

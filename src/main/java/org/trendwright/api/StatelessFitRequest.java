@@ -11,10 +11,12 @@ import java.util.List;
  * @param model   the model
  * @param horizon periods to forecast
  * @param levels  interval levels
+ * @param significanceLevel the level of the residual tests
  */
-public record StatelessFitRequest(JsonNode series, ModelSpec model, Integer horizon, List<Double> levels) {
+public record StatelessFitRequest(JsonNode series, ModelSpec model, Integer horizon, List<Double> levels,
+                                  Double significanceLevel) {
 
     FitRequest fit() {
-        return new FitRequest(model, horizon, levels);
+        return new FitRequest(model, horizon, levels, significanceLevel);
     }
 }

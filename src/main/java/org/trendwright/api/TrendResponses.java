@@ -5,6 +5,7 @@ import java.util.List;
 import org.trendwright.core.Observations;
 import org.trendwright.core.diagnostics.DurbinWatson;
 import org.trendwright.core.forecast.ForecastPoint;
+import org.trendwright.core.regression.Coefficient;
 import org.trendwright.core.regression.OlsFit;
 import org.trendwright.core.trend.TrendFit;
 import org.trendwright.core.trend.TrendForecast;
@@ -23,14 +24,15 @@ final class TrendResponses {
         TrendFit fit = Trends.fit(series, model.toSpec());
         TrendForecast forecast = fit.forecast(request.horizon(), request.levels());
         List<FitResponse.ForecastRow> rows = forecastRows(first, forecast);
-        return new FitResponse(ref, model, request.horizon(), request.levels(), fit.spec().description(),
-                coefficients(fit.ols()), statistics(fit, series),
+        ResidualChecks.Result checks = ResidualChecks.of(fit.ols(), series, request.significanceLevel());
+        return new FitResponse(ref, model, request.horizon(), request.levels(), request.significanceLevel(),
+                fit.spec().description(), rows(fit.ols().coefficients()), statistics(fit, series),
                 fit.growthRate().map(g -> new FitResponse.Growth(g.perPeriod(), g.lower95(), g.upper95())).orElse(null),
-                rows, chart(first, series, fit, rows, request.levels()));
+                checks.tests(), checks.robust(), checks.notes(), rows, chart(first, series, fit, rows, request.levels()));
     }
 
-    private static List<FitResponse.CoefficientRow> coefficients(OlsFit ols) {
-        return ols.coefficients().stream().map(c -> new FitResponse.CoefficientRow(c.name(), c.estimate(),
+    static List<FitResponse.CoefficientRow> rows(List<Coefficient> coefficients) {
+        return coefficients.stream().map(c -> new FitResponse.CoefficientRow(c.name(), c.estimate(),
                 c.standardError(), c.tStatistic(), c.pValue(), c.lower95(), c.upper95())).toList();
     }
 

@@ -83,7 +83,8 @@ class FitApiTest {
                     .body("forecast.period", equalTo(List.of("2021", "2022")))
                     .body("forecast[0].value", closeTo(1 + 22 + 22 * 22, 1e-6))
                     .body("chart.periods", hasSize(query.isEmpty() ? 21 : 20))
-                    .body("series.hasGaps", equalTo(!query.isEmpty()));
+                    .body("series.hasGaps", equalTo(!query.isEmpty()))
+                    .body("notes[0]", containsString(query.isEmpty() ? "exact" : "gaps"));
         }
     }
 
@@ -103,7 +104,11 @@ class FitApiTest {
                 + observations + "]}, \"model\"");
         JsonPath posted = server.given().contentType("application/json").body(body).post("/api/fit").then()
                 .statusCode(200).extract().jsonPath();
-        for (String part : List.of("model", "coefficients", "statistics", "growthRate", "forecast", "chart")) {
+        assertEquals(List.of("Breusch-Godfrey LM (order 4)", "Breusch-Godfrey F (order 4)", "Ljung-Box Q (2 lags)",
+                "ARCH LM (order 4)"), stored.getList("tests.test"));
+        assertEquals("Newey-West", stored.getString("robust.method"));
+        for (String part : List.of("model", "coefficients", "statistics", "growthRate", "tests", "robust", "notes",
+                "forecast", "chart")) {
             assertEquals(stored.getString(part), posted.getString(part), part);
         }
         assertEquals("Kettles", posted.getString("series.name"));
@@ -140,6 +145,8 @@ class FitApiTest {
                 .body("type", equalTo("urn:trendwright:problem:invalid-specification"));
         fit(annual, 1, "{\"model\": {\"family\": \"trend\"}, \"levels\": [1.5]}").then().statusCode(422)
                 .body("detail", containsString("between 0 and 1"));
+        fit(annual, 1, "{\"model\": {\"family\": \"trend\"}, \"significanceLevel\": 0}").then().statusCode(422)
+                .body("type", equalTo("urn:trendwright:problem:invalid-specification"));
         server.given().get("/metrics").then()
                 .body(containsString("trendwright_fits_seconds_count{cache=\"miss\",family=\"trend\",outcome=\"refused\"} 4"));
     }

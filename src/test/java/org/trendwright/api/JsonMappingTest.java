@@ -43,6 +43,6 @@ class JsonMappingTest {
                 FitRequest.class);
         assertEquals(mapper.writeValueAsString(terse.normalized()), mapper.writeValueAsString(spelled.normalized()));
         assertEquals("{\"model\":{\"family\":\"trend\",\"shape\":\"linear\",\"scale\":\"level\",\"seasonal\":false},"
-                + "\"horizon\":8,\"levels\":[0.8,0.95]}", mapper.writeValueAsString(terse.normalized()));
+                + "\"horizon\":8,\"levels\":[0.8,0.95],\"significanceLevel\":0.05}", mapper.writeValueAsString(terse.normalized()));
     }
 }
