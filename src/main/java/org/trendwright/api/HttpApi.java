@@ -7,6 +7,7 @@ import io.javalin.json.JavalinJackson;
 import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
 import java.time.Duration;
 import java.util.List;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.function.BooleanSupplier;
 import org.eclipse.jetty.server.handler.GracefulHandler;
@@ -16,8 +17,9 @@ import org.trendwright.store.SeriesRepository;
 
 /**
  * Builds the Javalin application: routes, the one error mapper, the JSON mapper, request logging
- * and metrics, the body size limit, and a graceful stop that lets requests in flight finish
- * (up to {@code stopTimeout}) before the server closes.
+ * and metrics, the body size limit, a gate that holds requests until the store is ready, and a
+ * graceful stop that lets requests in flight finish (up to {@code stopTimeout}) before the server
+ * closes.
  */
 public final class HttpApi {
 
@@ -32,10 +34,12 @@ public final class HttpApi {
      * @param limits            intake limits
      * @param maxBodyBytes      the largest request body accepted
      * @param stopTimeout       how long a stop waits for requests in flight
+     * @param storeReady        completes when the store is migrated (and seeded); requests that
+     *                          arrive before wait for it, so the server can start while it migrates
      */
     public record Services(SeriesRepository series, FitResultRepository fits, BooleanSupplier databaseReachable,
                            PrometheusMeterRegistry registry, ObjectMapper mapper, IntakeLimits limits,
-                           long maxBodyBytes, Duration stopTimeout) {
+                           long maxBodyBytes, Duration stopTimeout, CompletableFuture<?> storeReady) {
     }
 
     /** A built, not yet started application and the routes it registered ("GET /api/series"). */
@@ -62,8 +66,13 @@ public final class HttpApi {
                 server.setHandler(new GracefulHandler());
             });
             config.requestLogger.http(observer::observe);
-            config.events.handlerAdded(h -> routes.add(h.getHttpMethod().name() + " " + h.getPath()));
+            config.events.handlerAdded(h -> {
+                if (h.getHttpMethod().isHttpMethod()) {
+                    routes.add(h.getHttpMethod().name() + " " + h.getPath());
+                }
+            });
             ProblemMapper.register(config.routes);
+            config.routes.before(ctx -> services.storeReady().join());
             new SeriesRoutes(services.series(), uploads).register(config.routes);
             new FitRoutes(services.series(), fitService, uploads).register(config.routes);
             new OperationsRoutes(services.databaseReachable(), services.registry()).register(config.routes);

@@ -10,8 +10,9 @@ import org.slf4j.LoggerFactory;
 /**
  * Logs one key=value line per request (method, path, route, status, ms) and records the timer
  * {@code http.server.requests} (tags method, route, status), which Prometheus shows as
- * {@code http_server_requests_seconds_*}. The route is the matched path template, so ids do not
- * blow up the number of series. Thread-safe.
+ * {@code http_server_requests_seconds_*} with histogram buckets, from which Prometheus computes
+ * percentiles. The route is the matched path template, so ids do not blow up the number of
+ * series. Thread-safe.
  */
 final class RequestObserver {
 

@@ -10,6 +10,8 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.time.Clock;
 import java.util.List;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.trendwright.api.HttpApi;
@@ -41,40 +43,65 @@ public final class TrendwrightApp implements AutoCloseable {
         this.ownsDatabase = ownsDatabase;
     }
 
-    /** Opens the configured store (creating the data directory for SQLite) and starts. */
+    /**
+     * Opens the configured store (creating the data directory for SQLite) and starts. The schema
+     * migrations and the demo data run while the HTTP server starts (requests wait for them); this
+     * returns once both are done.
+     */
     public static TrendwrightApp start(Settings settings, Clock clock) {
         if (settings.usesEmbeddedStore()) {
             createDirectory(settings);
         }
-        Database database = Database.open(settings.jdbcUrl(), settings.databaseSchema(), settings.poolSize());
+        Database database = Database.connect(settings.jdbcUrl(), settings.databaseSchema(), settings.poolSize());
+        TrendwrightApp app = null;
         try {
-            return start(settings, database, clock, true);
+            CompletableFuture<Void> ready = CompletableFuture.runAsync(() -> {
+                database.migrate();
+                seed(settings, new SeriesRepository(database, clock));
+            });
+            app = start(settings, database, clock, true, ready);
+            ready.join();
+            return app;
         } catch (RuntimeException e) {
-            database.close();
-            throw e;
+            if (app != null) {
+                app.close();
+            } else {
+                database.close();
+            }
+            throw e instanceof CompletionException && e.getCause() instanceof RuntimeException cause ? cause : e;
         }
     }
 
-    /** Starts on a store opened by the caller, who keeps closing it. */
+    /** Starts on a store opened and migrated by the caller, who keeps closing it. */
     public static TrendwrightApp start(Settings settings, Database database, Clock clock) {
-        return start(settings, database, clock, false);
+        seed(settings, new SeriesRepository(database, clock));
+        return start(settings, database, clock, false, CompletableFuture.completedFuture(null));
     }
 
-    private static TrendwrightApp start(Settings settings, Database database, Clock clock, boolean owns) {
-        SeriesRepository series = new SeriesRepository(database, clock);
-        IntakeLimits limits = new IntakeLimits(settings.maxObservationsPerSeries(), settings.maxSeriesPerUpload());
+    private static void seed(Settings settings, SeriesRepository series) {
         if (settings.loadDemoData()) {
-            DemoData.loadIfEmpty(series, limits);
+            DemoData.loadIfEmpty(series, limits(settings));
         }
+    }
+
+    private static IntakeLimits limits(Settings settings) {
+        return new IntakeLimits(settings.maxObservationsPerSeries(), settings.maxSeriesPerUpload());
+    }
+
+    private static TrendwrightApp start(Settings settings, Database database, Clock clock, boolean owns,
+                                        CompletableFuture<?> ready) {
+        SeriesRepository series = new SeriesRepository(database, clock);
+        IntakeLimits limits = limits(settings);
         PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
         new JvmMemoryMetrics().bindTo(registry);
         new UptimeMetrics().bindTo(registry);
         HttpApi.Built built = HttpApi.create(new HttpApi.Services(series, new FitResultRepository(database, clock),
                 database::isReachable, registry, JsonMapping.create(), limits, settings.maxBodyBytes(),
-                settings.shutdownGrace()));
+                settings.shutdownGrace(), ready));
         built.app().start(settings.host(), settings.port());
-        LOG.info("event=started url=http://{}:{} store={}", settings.host(), built.app().port(),
-                database.dialect().name().toLowerCase(java.util.Locale.ROOT));
+        LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={}", settings.host(), built.app().port(),
+                database.dialect().name().toLowerCase(java.util.Locale.ROOT),
+                java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
         return new TrendwrightApp(built.app(), built.routes(), database, owns);
     }
 

@@ -20,9 +20,12 @@ public final class Database implements AutoCloseable {
     private final HikariDataSource dataSource;
     private final Dialect dialect;
 
-    private Database(HikariDataSource dataSource, Dialect dialect) {
+    private final String schema;
+
+    private Database(HikariDataSource dataSource, Dialect dialect, String schema) {
         this.dataSource = dataSource;
         this.dialect = dialect;
+        this.schema = schema;
     }
 
     /**
@@ -30,6 +33,21 @@ public final class Database implements AutoCloseable {
      * migrates it.
      */
     public static Database open(String jdbcUrl, String schema, int poolSize) {
+        Database database = connect(jdbcUrl, schema, poolSize);
+        try {
+            database.migrate();
+        } catch (RuntimeException e) {
+            database.close();
+            throw e;
+        }
+        return database;
+    }
+
+    /**
+     * Opens the connection pool without migrating, so that start-up can run the migrations while
+     * the HTTP server starts; call {@link #migrate()} before the first query.
+     */
+    public static Database connect(String jdbcUrl, String schema, int poolSize) {
         Dialect dialect = Dialect.of(jdbcUrl);
         HikariConfig config = new HikariConfig();
         config.setJdbcUrl(jdbcUrl);
@@ -47,17 +65,11 @@ public final class Database implements AutoCloseable {
             config.addDataSourceProperty("busy_timeout", "5000");
             config.addDataSourceProperty("transaction_mode", "IMMEDIATE");
         }
-        HikariDataSource dataSource = new HikariDataSource(config);
-        try {
-            migrate(dataSource, dialect, schema);
-        } catch (RuntimeException e) {
-            dataSource.close();
-            throw e;
-        }
-        return new Database(dataSource, dialect);
+        return new Database(new HikariDataSource(config), dialect, schema);
     }
 
-    private static void migrate(DataSource dataSource, Dialect dialect, String schema) {
+    /** Brings the schema up to date with this dialect's Flyway migrations. */
+    public void migrate() {
         var flyway = Flyway.configure().dataSource(dataSource).locations(dialect.migrations())
                 .loggers("slf4j");
         if (schema != null) {
