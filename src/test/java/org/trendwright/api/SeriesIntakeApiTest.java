@@ -112,6 +112,25 @@ class SeriesIntakeApiTest {
     }
 
     @Test
+    void reads_a_csv_file_sent_as_a_form_upload() {
+        byte[] csv = "week,Visits\n2024-W05,10\n2024-W06,12\n".getBytes(StandardCharsets.UTF_8);
+        server.given().multiPart("file", "visits.csv", csv, "text/csv").post("/api/series").then().statusCode(201)
+                .body("series[0].name", equalTo("Visits")).body("series[0].frequency", equalTo("weekly"));
+        server.given().multiPart("other", "visits.csv", csv, "text/csv").post("/api/series").then().statusCode(400)
+                .body("field", equalTo("file"));
+    }
+
+    @Test
+    void refuses_a_json_frequency_that_contradicts_the_periods() {
+        server.given().contentType("application/json").body("{\"name\": \"A\", \"frequency\": \"monthly\","
+                + " \"observations\": [{\"period\": \"2024-Q1\", \"value\": 1}]}").post("/api/series").then()
+                .statusCode(422).body("field", equalTo("frequency"))
+                .body("detail", containsString("the request says monthly but the periods are quarterly"));
+        server.given().contentType("application/json").body("{\"observations\": [{\"period\": \"2024\","
+                + " \"value\": 1}]}").post("/api/series").then().statusCode(422).body("field", equalTo("name"));
+    }
+
+    @Test
     void creates_several_series_from_one_json_request() {
         String body = "{\"series\": [{\"name\": \"A\", \"observations\": [{\"period\": \"2024-01\", \"value\": 1},"
                 + " {\"period\": \"2024-02\", \"value\": 2}]}, {\"name\": \"B\", \"frequency\": \"annual\","
