@@ -148,7 +148,8 @@ public final class ArForecasts {
 
     private static void checkArguments(int horizon, double[] levels) {
         if (horizon < 1) {
-            throw new InvalidSpecificationException("A forecast horizon must be at least 1 period, got " + horizon + ".");
+            throw new InvalidSpecificationException("A forecast horizon must be at least 1 period, got " + horizon
+                    + ".");
         }
         for (double level : levels) {
             if (!(level > 0 && level < 1)) {

@@ -32,7 +32,8 @@ public record ArSpec(int order, LagSelection selection, boolean differenced, boo
     /** The order chosen by AIC or BIC among 0..maxOrder on a common sample. */
     public static ArSpec selectedBy(LagSelection criterion, int maxOrder) {
         if (criterion == LagSelection.FIXED) {
-            throw new InvalidSpecificationException("selectedBy needs a criterion (AIC or BIC); use ofOrder for a fixed order.");
+            throw new InvalidSpecificationException("selectedBy needs a criterion (AIC or BIC); use ofOrder for a"
+                    + " fixed order.");
         }
         return new ArSpec(maxOrder, criterion, false, false);
     }

@@ -56,7 +56,8 @@ public final class Autoregression {
         int start = lags.length == 0 ? 0 : lags[lags.length - 1];
         OlsFit regression = LeastSquares.fit(design(w, lags, start), LagDesigns.lagged(w, 0, start));
         if (spec.selection() == LagSelection.FIXED) {
-            candidates = List.of(new CandidateOrder(order, regression.observations(), regression.aic(), regression.bic()));
+            candidates = List.of(new CandidateOrder(order, regression.observations(), regression.aic(),
+                    regression.bic()));
         }
         return assemble(series, spec, order, lags, regression, candidates);
     }
@@ -84,7 +85,8 @@ public final class Autoregression {
      */
     private static List<CandidateOrder> compareOrders(double[] w, int maxOrder, int seasonal, int start) {
         IntStream others = IntStream.rangeClosed(1, maxOrder).filter(lag -> lag != seasonal);
-        int[] nestingOrder = seasonal > 0 ? IntStream.concat(IntStream.of(seasonal), others).toArray() : others.toArray();
+        int[] nestingOrder = seasonal > 0 ? IntStream.concat(IntStream.of(seasonal), others).toArray()
+                                          : others.toArray();
         int[] widths = IntStream.rangeClosed(0, maxOrder).map(p -> 1 + lags(p, seasonal).length).toArray();
         return OrderSelection.compareNested(design(w, nestingOrder, start), LagDesigns.lagged(w, 0, start), widths);
     }
@@ -109,7 +111,8 @@ public final class Autoregression {
         }
         if (series.periodsPerYear() < 2) {
             throw new InvalidSpecificationException("A seasonal lag needs a series with seasons (quarterly, monthly,"
-                    + " ...), but this one has " + series.periodsPerYear() + " period per year; drop the seasonal lag.");
+                    + " ...), but this one has " + series.periodsPerYear()
+                    + " period per year; drop the seasonal lag.");
         }
         return series.periodsPerYear();
     }

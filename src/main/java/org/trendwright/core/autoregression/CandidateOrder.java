@@ -1,5 +1,7 @@
 package org.trendwright.core.autoregression;
 
+import org.trendwright.core.InvalidSpecificationException;
+
 /**
  * One candidate lag count examined by an information criterion, fitted on the common estimation
  * sample shared by all candidates (see {@link LagSelection}).
@@ -16,7 +18,8 @@ public record CandidateOrder(int order, int observations, double aic, double bic
         return switch (selection) {
             case AIC -> aic;
             case BIC -> bic;
-            case FIXED -> throw new IllegalArgumentException("A fixed lag count has no criterion value.");
+            case FIXED -> throw new InvalidSpecificationException("A fixed lag count has no criterion value; ask for"
+                    + " AIC or BIC.");
         };
     }
 }

@@ -37,7 +37,10 @@ public final class LagDesigns {
         return d;
     }
 
-    /** The values w_{t−lag} for t = from..w.length−1 (0-based): the regressor "lag" rows of a regression starting at from. */
+    /**
+     * The values w_{t−lag} for t = from..w.length−1 (0-based): the lag-{@code lag} regressor of a
+     * regression whose first row is t = from (lag 0 gives the response).
+     */
     public static double[] lagged(double[] w, int lag, int from) {
         return Arrays.copyOfRange(w, from - lag, w.length - lag);
     }

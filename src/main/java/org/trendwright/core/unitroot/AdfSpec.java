@@ -20,7 +20,8 @@ public record AdfSpec(DeterministicTerms terms, LagSelection selection, int lags
 
     public AdfSpec {
         if (terms == null || selection == null) {
-            throw new InvalidSpecificationException("A Dickey-Fuller test needs its deterministic terms and a lag choice.");
+            throw new InvalidSpecificationException("A Dickey-Fuller test needs its deterministic terms and a lag"
+                    + " choice.");
         }
         if (lags < 0 && !(lags == SCHWERT_MAXIMUM && selection != LagSelection.FIXED)) {
             throw new InvalidSpecificationException("The number of lagged differences cannot be negative, got " + lags
@@ -42,7 +43,8 @@ public record AdfSpec(DeterministicTerms terms, LagSelection selection, int lags
     /** The same test with p chosen by the criterion among 0..maxLags (or Schwert's maximum). */
     public AdfSpec withLagsSelectedBy(LagSelection criterion, int maxLags) {
         if (criterion == LagSelection.FIXED) {
-            throw new InvalidSpecificationException("Choose AIC or BIC here; use withFixedLags for a fixed number of lags.");
+            throw new InvalidSpecificationException("Choose AIC or BIC here; use withFixedLags for a fixed number of"
+                    + " lags.");
         }
         return new AdfSpec(terms, criterion, maxLags, level);
     }

@@ -61,6 +61,8 @@ public final class AugmentedDickeyFuller {
      *         residual degree of freedom
      * @throws org.trendwright.core.RankDeficientDesignException for a series whose level or changes
      *         are constant (tau is then undefined)
+     * @throws org.trendwright.core.InvalidSpecificationException when the test regression fits
+     *         exactly, so that se(γ̂) = 0 and tau is infinite or NaN
      */
     public static AdfResult test(Observations series, AdfSpec spec) {
         LagDesigns.requireConsecutive(series, "The augmented Dickey-Fuller test");
@@ -78,7 +80,8 @@ public final class AugmentedDickeyFuller {
         }
         OlsFit regression = LeastSquares.fit(design(y, d, lags, lags, spec.terms()), LagDesigns.lagged(d, 0, lags));
         if (spec.selection() == LagSelection.FIXED) {
-            candidates = List.of(new CandidateOrder(lags, regression.observations(), regression.aic(), regression.bic()));
+            candidates = List.of(new CandidateOrder(lags, regression.observations(), regression.aic(),
+                    regression.bic()));
         }
         return result(spec, lags, maximumLags, candidates, regression);
     }
@@ -146,9 +149,10 @@ public final class AugmentedDickeyFuller {
     }
 
     private static String reading(AdfSpec spec, double tau, double pValue) {
-        String evidence = String.format(Locale.ROOT, " at the %s%% level (tau = %.3f, p = %.4f)",
-                new BigDecimal(String.valueOf(100 * spec.level())).stripTrailingZeros().toPlainString(),
-                tau, pValue);
+        String level = BigDecimal.valueOf(spec.level()).movePointRight(2).stripTrailingZeros().toPlainString();
+        // Below the table's smallest probability the p-value is an extrapolation; say only that it is tiny.
+        String p = pValue < 0.0005 ? "p < 0.0005" : String.format(Locale.ROOT, "p = %.4f", pValue);
+        String evidence = String.format(Locale.ROOT, " at the %s%% level (tau = %.3f, %s)", level, tau, p);
         if (TestResult.decide(pValue, spec.level()) == Decision.DO_NOT_REJECT) {
             return "A unit root cannot be rejected" + evidence + ": shocks to the series look permanent, so a trend"
                     + " line fitted to its levels may be spurious (Granger & Newbold 1974) and its intervals too"

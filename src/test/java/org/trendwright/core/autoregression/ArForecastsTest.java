@@ -64,8 +64,9 @@ class ArForecastsTest {
             PredictionInterval wide = point.interval(0.95);
             PredictionInterval half = point.interval(0.5);
             // standard normal quantiles 0.975 -> 1.959963985, 0.75 -> 0.6744897502 (common practice)
-            assertEquals(1.959963985 * point.standardError(), wide.upper() - point.value(), 1e-8 * point.standardError());
-            assertEquals(0.6744897502 * point.standardError(), point.value() - half.lower(), 1e-8 * point.standardError());
+            double se = point.standardError();
+            assertEquals(1.959963985 * se, wide.upper() - point.value(), 1e-8 * se);
+            assertEquals(0.6744897502 * se, point.value() - half.lower(), 1e-8 * se);
         }
         assertEquals(List.of(0.8, 0.95), ArForecasts.forecast(fit, 1).points().get(0).intervals().stream()
                 .map(PredictionInterval::level).toList());

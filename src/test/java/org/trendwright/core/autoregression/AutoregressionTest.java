@@ -66,12 +66,13 @@ class AutoregressionTest {
                 3000, 200);
         ArFit fit = Autoregression.fit(Observations.consecutive(y, 4, 1), ArSpec.ofOrder(1).withSeasonalLag());
         assertArrayEquals(new int[] {1, 4}, fit.lags());
-        assertEquals(List.of("constant", "lag 1", "lag 4"), fit.coefficients().stream().map(Coefficient::name).toList());
+        assertEquals(List.of("constant", "lag 1", "lag 4"),
+                fit.coefficients().stream().map(Coefficient::name).toList());
         assertWithinFourStandardErrors(2, fit.coefficients().get(0));
         assertWithinFourStandardErrors(0.4, fit.coefficients().get(1));
         assertWithinFourStandardErrors(0.3, fit.coefficients().get(2));
-        assertArrayEquals(new double[] {fit.coefficients().get(1).estimate(), 0, 0, fit.coefficients().get(2).estimate()},
-                fit.lagCoefficients(), 0);
+        double[] phi = {fit.coefficients().get(1).estimate(), 0, 0, fit.coefficients().get(2).estimate()};
+        assertArrayEquals(phi, fit.lagCoefficients(), 0);
         assertEquals(3000 - 4, fit.observationsUsed());
     }
 
@@ -154,7 +155,8 @@ class AutoregressionTest {
         // correlation at lag 2 of about 0.4, some 9 standard errors at T = 499.
         double[] y = SimulatedSeries.autoregression(new SplittableRandom(18), 0, new double[] {0.3, 0.5}, 1, 500, 100);
         ArFit underfitted = Autoregression.fit(Observations.annual(y), ArSpec.ofOrder(1));
-        assertTrue(underfitted.flaggedLags().stream().anyMatch(r -> r.lag() <= 2), underfitted.flaggedLags().toString());
+        assertTrue(underfitted.flaggedLags().stream().anyMatch(r -> r.lag() <= 2),
+                underfitted.flaggedLags().toString());
         ResidualAutocorrelation first = underfitted.residualAutocorrelations().get(0);
         assertEquals(1 / Math.sqrt(499), first.standardError(), 1e-15);
         assertEquals(Autocorrelations.defaultMaxLag(499, 1), underfitted.residualAutocorrelations().size());

@@ -59,7 +59,8 @@ class NistRandomWalkCaseStudyTest {
     void linear_trend_fit_matches_the_published_listing() {
         double[] y = ReferenceData.column(DATA, 1);
         double[] t = ReferenceData.column(DATA, 0);
-        OlsFit trend = LeastSquares.fit(new Design(List.of(LagDesigns.ones(y.length), t), List.of("b0", "b1"), true), y);
+        Design design = new Design(List.of(LagDesigns.ones(y.length), t), List.of("b0", "b1"), true);
+        OlsFit trend = LeastSquares.fit(design, y);
         String model = "linear_trend y=b0+b1*t (t=1..500)";
         // NIST e-Handbook 1.4.2.3, companion output listing
         assertPrinted(model, "b0", trend.coefficient("b0").estimate());
@@ -87,7 +88,8 @@ class NistRandomWalkCaseStudyTest {
 
     private static void assertPrintedStandardError(String model, String quantity, double actual) {
         String printed = printed(model, quantity).get("std_error");
-        assertEquals(Double.parseDouble(printed), actual, halfUnitInLastPlace(printed), model + " se(" + quantity + ")");
+        assertEquals(Double.parseDouble(printed), actual, halfUnitInLastPlace(printed),
+                model + " se(" + quantity + ")");
     }
 
     private static double published(String model, String quantity) {

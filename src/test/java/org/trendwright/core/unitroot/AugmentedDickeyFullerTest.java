@@ -28,7 +28,8 @@ class AugmentedDickeyFullerTest {
         // Two computations of the same statistic: pivoted QR here, partialled-out sums in the generator.
         double[] walk = SimulatedSeries.randomWalk(new SplittableRandom(50), 0, 120);
         for (DeterministicTerms terms : DeterministicTerms.values()) {
-            AdfResult result = AugmentedDickeyFuller.test(Observations.annual(walk), AdfSpec.of(terms).withFixedLags(0));
+            AdfResult result = AugmentedDickeyFuller.test(Observations.annual(walk),
+                    AdfSpec.of(terms).withFixedLags(0));
             assertEquals(DickeyFullerTableGenerator.tau(walk, terms), result.tau(), 1e-10, terms.toString());
             assertEquals(119, result.observations());
         }

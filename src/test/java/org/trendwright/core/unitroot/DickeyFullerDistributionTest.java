@@ -94,7 +94,8 @@ class DickeyFullerDistributionTest {
     void critical_values_without_constant_and_with_trend_agree_with_mackinnon_2010_from_memory(
             DeterministicTerms terms, double level, double bInf, double b1, double b2, double b3) {
         for (int t : new int[] {25, 40, 100, 300, 1000, 5000}) {
-            assertAgrees(terms, t, level, surface(bInf, b1, b2, b3, t), MACKINNON_OWN_ERROR, "MacKinnon (2010), from memory");
+            assertAgrees(terms, t, level, surface(bInf, b1, b2, b3, t), MACKINNON_OWN_ERROR,
+                    "MacKinnon (2010), from memory");
         }
     }
 
@@ -123,9 +124,35 @@ class DickeyFullerDistributionTest {
                 double w = (1 / 100.0 - 1 / 150.0) / (1 / 75.0 - 1 / 150.0);
                 double predicted = w * DickeyFullerDistribution.quantile(terms, 75, p)
                         + (1 - w) * DickeyFullerDistribution.quantile(terms, 150, p);
-                double error = Math.sqrt(sq(w * se(terms, 75, p)) + sq((1 - w) * se(terms, 150, p)) + sq(se(terms, 100, p)));
+                double error = Math.sqrt(sq(w * se(terms, 75, p)) + sq((1 - w) * se(terms, 150, p))
+                        + sq(se(terms, 100, p)));
                 assertEquals(DickeyFullerDistribution.quantile(terms, 100, p), predicted, 0.002 + 4 * error,
                         terms + " p = " + p);
+            }
+        }
+    }
+
+    @Test
+    void probit_interpolation_predicts_an_omitted_tail_quantile_within_monte_carlo_error() {
+        // Leave each tabulated probability 0.005..0.10 out in turn and interpolate it from its neighbours,
+        // linearly in the normal quantile: with twice the real spacing the error must still be within 4 of
+        // the combined Monte-Carlo standard errors, so with the real spacing interpolation adds less than
+        // the tables' own noise where tests are decided.
+        DickeyFullerTables tables = DickeyFullerTables.get();
+        double[] p = tables.probabilities();
+        double[] z = tables.probits();
+        for (DeterministicTerms terms : DeterministicTerms.values()) {
+            for (int t : new int[] {20, 50, 100, 250, 1000}) {
+                double[] q = tables.quantiles(terms, t);
+                double[] se = tables.standardErrors(terms, t);
+                for (int i = 1; i < p.length - 1 && p[i] <= 0.10; i++) {
+                    if (p[i] >= 0.005) {
+                        double w = (z[i + 1] - z[i]) / (z[i + 1] - z[i - 1]);
+                        double predicted = w * q[i - 1] + (1 - w) * q[i + 1];
+                        double error = Math.sqrt(sq(se[i]) + sq(w * se[i - 1]) + sq((1 - w) * se[i + 1]));
+                        assertEquals(q[i], predicted, 4 * error, terms + " T = " + t + " p = " + p[i]);
+                    }
+                }
             }
         }
     }

@@ -201,11 +201,11 @@ public final class DickeyFullerTableGenerator {
 
     private static void writeHeader(PrintWriter out) {
         out.println("# Null distribution of the Dickey-Fuller tau statistic (Dickey & Fuller 1979), simulated.");
-        out.println("# Written by org.trendwright.core.unitroot.DickeyFullerTableGenerator (src/test/java); do not edit.");
+        out.println("# Written by " + DickeyFullerTableGenerator.class.getName() + " (src/test/java); do not edit.");
         out.printf(Locale.ROOT, "# seed %d (walks for sample size T use seed + T), %d Gaussian random walks per T,%n",
                 SEED, REPLICATIONS);
-        out.println("# java.util.SplittableRandom.nextGaussian() on Java " + System.getProperty("java.specification.version")
-                + ". T = observations in the test regression.");
+        out.println("# java.util.SplittableRandom.nextGaussian() on Java "
+                + System.getProperty("java.specification.version") + ". T = observations in the test regression.");
         out.println("# kind quantile: x_(ceil(pR)); kind standard_error: its Monte-Carlo standard error.");
         out.println("# Regenerate: mvn -B -o -q test-compile && java -cp target/classes:target/test-classes "
                 + DickeyFullerTableGenerator.class.getName());
