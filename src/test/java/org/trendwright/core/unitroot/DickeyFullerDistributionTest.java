@@ -61,7 +61,7 @@ class DickeyFullerDistributionTest {
      * (the latter test the 1/T interpolation and the extrapolation beyond T = 1000). We allow the
      * surface 0.005 of its own: at T = 50 it lies 0.011 below our table at 1%, and the independent
      * 400,000-replication check in reference/README.md found the same gap (0.0095) there, so the
-     * surface (or the last digits of its transcription) is off by about 0.01 at small T. Plus 4 of
+     * surface (or the last digits of the copy we hold) is off by about 0.01 at small T. Plus 4 of
      * our standard errors. Linear interpolation in 1/T adds at most |β2|(Δ(1/T))²/4 ≈ 0.0004
      * (T = 20..25, 1%), well inside that.
      */
