@@ -107,20 +107,24 @@ class ArForecastsTest {
     @Test
     void ninety_five_percent_intervals_cover_about_95_percent_of_simulated_future_values() {
         // Seeded: 2000 AR(2) series (0.5, 0.3), n = 200, fitted as AR(2); the next 6 values come from the
-        // same process. Intervals ignore parameter uncertainty, which costs about 0.3 points at n = 200.
-        // Band 93.5%..96.5%: 3 binomial standard errors (0.49 points each at 2000 runs) around 95%.
+        // same process. The binomial standard error of a 95% coverage at 2000 runs is 0.49 points. The
+        // intervals ignore parameter uncertainty, which lowers coverage, more so further ahead (about half
+        // a point at h = 1 and one point at h = 6 for this model and n). Band: 93%..96.5%, i.e. 3 standard
+        // errors above 95% and 4 below. Wrong psi-weights or quantiles would miss it by far (a 90% quantile
+        // covers 90%).
         double[] coverage = coverage(new SplittableRandom(36), new double[] {0.5, 0.3}, ArSpec.ofOrder(2), 2000, 6);
-        assertEquals(0.95, coverage[0], 0.015, "h = 1 coverage " + coverage[0]);
-        assertEquals(0.95, coverage[5], 0.015, "h = 6 coverage " + coverage[5]);
+        assertCoverageNearNinetyFive(coverage[0], "h = 1");
+        assertCoverageNearNinetyFive(coverage[5], "h = 6");
     }
 
     @Test
     void ninety_five_percent_intervals_of_a_differenced_model_cover_about_95_percent_of_future_levels() {
         // Seeded: 2000 series whose differences are AR(1) with phi = 0.4 (so the levels are ARIMA(1,1,0)),
-        // n = 200, fitted as AR(1) on differences; coverage of the level 4 steps ahead. Band as above.
+        // n = 200, fitted as AR(1) on differences; coverage of the level 1 and 4 steps ahead. Band as above.
         double[] coverage = coverage(new SplittableRandom(37), new double[] {1.4, -0.4},
                 ArSpec.ofOrder(1).onDifferences(), 2000, 4);
-        assertEquals(0.95, coverage[3], 0.015, "h = 4 coverage " + coverage[3]);
+        assertCoverageNearNinetyFive(coverage[0], "h = 1");
+        assertCoverageNearNinetyFive(coverage[3], "h = 4");
     }
 
     @Test
@@ -140,6 +144,10 @@ class ArForecastsTest {
         assertThrows(InvalidSpecificationException.class, () -> ArForecasts.forecast(fit, 0));
         assertThrows(InvalidSpecificationException.class, () -> ArForecasts.forecast(fit, 4, 0.95, 1.0));
         assertThrows(InvalidSpecificationException.class, () -> ArForecasts.forecast(fit, 4, 0.0));
+    }
+
+    private static void assertCoverageNearNinetyFive(double coverage, String horizon) {
+        assertTrue(coverage >= 0.93 && coverage <= 0.965, horizon + " coverage " + coverage);
     }
 
     private static Observations ar1Series(long seed) {
