@@ -137,21 +137,12 @@ final class CharacteristicFunctionInversion {
             absoluteSum += Math.abs(ci);
         }
         double low = Math.log(Math.PI * TRUNCATION_ERROR / absoluteSum);
-        double high = low;
-        while (truncationBound(c, Math.exp(high), modulusAndImaginaryPart(c, Math.exp(high))[0]) > TRUNCATION_ERROR) {
-            high += 1;
-        }
         double step = FIRST_STEP;
-        int intervals = (int) Math.ceil((high - low) / step);
-        double sum = 0;
-        for (int k = 0; k <= intervals; k++) {
-            sum += modulusAndImaginaryPart(c, Math.exp(low + k * step))[1];
-        }
+        int intervals = (int) Math.ceil((upperLogLimit(c, low) - low) / step);
+        double sum = imaginaryPartsOnGrid(c, low, step, intervals + 1);
         double previous = 0.5 - step * sum / Math.PI;
         for (int halving = 0; halving < MAX_HALVINGS; halving++) {
-            for (int k = 0; k < intervals; k++) {
-                sum += modulusAndImaginaryPart(c, Math.exp(low + (k + 0.5) * step))[1];
-            }
+            sum += imaginaryPartsOnGrid(c, low + step / 2, step, intervals);
             step /= 2;
             intervals *= 2;
             double current = 0.5 - step * sum / Math.PI;
@@ -161,6 +152,24 @@ final class CharacteristicFunctionInversion {
             previous = current;
         }
         return previous;
+    }
+
+    /** The first s = low + 1, low + 2, ... at which the truncation bound for t &gt;= e^s holds. */
+    private static double upperLogLimit(double[] c, double low) {
+        double high = low;
+        while (truncationBound(c, Math.exp(high), modulusAndImaginaryPart(c, Math.exp(high))[0]) > TRUNCATION_ERROR) {
+            high += 1;
+        }
+        return high;
+    }
+
+    /** sum_{k < points} Im phi(exp(first + k step)). */
+    private static double imaginaryPartsOnGrid(double[] c, double first, double step, int points) {
+        double sum = 0;
+        for (int k = 0; k < points; k++) {
+            sum += modulusAndImaginaryPart(c, Math.exp(first + k * step))[1];
+        }
+        return sum;
     }
 
     /** (2/pi) |phi(T)| / W(T): the bound on (1/pi) int_T^inf |phi(t)|/t dt of the class comment. */

@@ -139,10 +139,7 @@ record DurbinWatsonSpectrum(double[] eigenvalues, boolean spansConstant) {
      * of t on x_t + x_{n-1-t} (even j) or x_t - x_{n-1-t} (odd j), halving the work.
      */
     static double[][] cosineTransform(double[][] columns, int n) {
-        double[] cosine = new double[4 * n];
-        for (int m = 0; m < cosine.length; m++) {
-            cosine[m] = Math.cos(Math.PI * m / (2.0 * n));
-        }
+        double[] cosine = cosineTable(n);
         int k = columns.length;
         int half = (n + 1) / 2;
         double[][][] folded = folded(columns, n, half);
@@ -169,6 +166,15 @@ record DurbinWatsonSpectrum(double[] eigenvalues, boolean spansConstant) {
             }
         }
         return out;
+    }
+
+    /** cos(pi m / (2n)) for m = 0..4n-1: one full period, so j (2t + 1) mod 4n indexes every cosine needed. */
+    private static double[] cosineTable(int n) {
+        double[] cosine = new double[4 * n];
+        for (int m = 0; m < cosine.length; m++) {
+            cosine[m] = Math.cos(Math.PI * m / (2.0 * n));
+        }
+        return cosine;
     }
 
     /**
