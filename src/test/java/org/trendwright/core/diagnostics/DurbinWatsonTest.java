@@ -8,6 +8,8 @@ import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.arrays;
 import static org.quicktheories.generators.SourceDSL.doubles;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Random;
 import java.util.function.UnaryOperator;
@@ -38,7 +40,7 @@ class DurbinWatsonTest {
     void statistic_lies_between_zero_and_four() {
         // common practice: (a - b)^2 <= 2a^2 + 2b^2 bounds the numerator by 4 sum e_t^2
         qt().withFixedSeed(SEED).withExamples(300).forAll(series())
-                .assuming(e -> java.util.Arrays.stream(e).anyMatch(v -> v != 0))
+                .assuming(e -> Arrays.stream(e).anyMatch(v -> v != 0))
                 .check(e -> DurbinWatson.statistic(e) >= 0 && DurbinWatson.statistic(e) <= 4);
     }
 
@@ -53,21 +55,24 @@ class DurbinWatsonTest {
 
     @Test
     void adding_a_constant_to_the_series_leaves_the_test_unchanged() {
+        // common practice: with a constant in the design the residuals, hence d and its null law, do not change
         qt().withFixedSeed(SEED).withExamples(60).forAll(series(), doubles().between(-1e3, 1e3))
                 .assuming((y, shift) -> notExact(y))
-                .checkAssert((y, shift) -> assertSameTest(y, java.util.Arrays.stream(y).map(v -> v + shift).toArray()));
+                .checkAssert((y, shift) -> assertSameTest(y, Arrays.stream(y).map(v -> v + shift).toArray()));
     }
 
     @Test
     void rescaling_the_series_leaves_the_test_unchanged() {
+        // common practice: residuals scale with y and d is a ratio of their squares (a sign flip included)
         qt().withFixedSeed(SEED).withExamples(60).forAll(series(), doubles().between(1e-3, 1e3))
                 .assuming((y, scale) -> notExact(y))
-                .checkAssert((y, scale) -> assertSameTest(y, java.util.Arrays.stream(y).map(v -> -scale * v).toArray()));
+                .checkAssert((y, scale) -> assertSameTest(y, Arrays.stream(y).map(v -> -scale * v).toArray()));
     }
 
     @Test
     void reversing_the_series_in_time_leaves_the_test_unchanged() {
-        // constant + t on the reversed series spans the same space (n + 1 - t), and d reads the same backwards
+        // common practice: constant + t on the reversed series spans the same space (n + 1 - t), so the
+        // residuals are reversed, and d reads the same backwards
         UnaryOperator<double[]> reverse = y -> {
             double[] r = new double[y.length];
             for (int t = 0; t < y.length; t++) {
@@ -161,7 +166,7 @@ class DurbinWatsonTest {
     void a_full_set_of_seasonal_dummies_counts_as_an_intercept() {
         // Four quarterly dummies add up to the constant, so the bounds hold with k' = k - 1 = 3.
         int n = 40;
-        java.util.List<double[]> columns = new java.util.ArrayList<>();
+        List<double[]> columns = new ArrayList<>();
         for (int quarter = 0; quarter < 4; quarter++) {
             double[] dummy = new double[n];
             for (int t = quarter; t < n; t += 4) {
@@ -214,7 +219,7 @@ class DurbinWatsonTest {
 
     private static Gen<double[]> series() {
         return arrays().ofClass(doubles().between(-100, 100), Double.class).withLengthBetween(8, 40)
-                .map(values -> java.util.Arrays.stream(values).mapToDouble(Double::doubleValue).toArray());
+                .map(values -> Arrays.stream(values).mapToDouble(Double::doubleValue).toArray());
     }
 
     /** True unless constant + t fits the series exactly (to rounding). */
