@@ -109,7 +109,12 @@ public record DurbinWatsonDistribution(double[] eigenvalues) {
         return 2 * sum / (m * (m + 2.0));
     }
 
-    /** P(d &lt;= x), the exact p-value against positive serial correlation when x is the observed d. */
+    /**
+     * P(d &lt;= x), the exact p-value against positive serial correlation when x is the observed d.
+     * 0 below the smallest eigenvalue and 1 at or above the largest.
+     *
+     * @throws InvalidSpecificationException when x is NaN or infinite
+     */
     public double probabilityAtMost(double x) {
         checkFinite(x);
         double[] weights = new double[eigenvalues.length];
@@ -119,7 +124,11 @@ public record DurbinWatsonDistribution(double[] eigenvalues) {
         return QuadraticFormProbability.atMostZero(weights);
     }
 
-    /** P(d &gt;= x), the exact p-value against negative serial correlation when x is the observed d. */
+    /**
+     * P(d &gt;= x), the exact p-value against negative serial correlation when x is the observed d.
+     *
+     * @throws InvalidSpecificationException when x is NaN or infinite
+     */
     public double probabilityAtLeast(double x) {
         checkFinite(x);
         double[] weights = new double[eigenvalues.length];
@@ -132,6 +141,9 @@ public record DurbinWatsonDistribution(double[] eigenvalues) {
     /**
      * The x with P(d &lt;= x) = p, to {@link #QUANTILE_ACCURACY}, by Brent's method on [nu_1, nu_m]
      * (where the distribution function runs from 0 to 1), started at the normal approximation.
+     * When all eigenvalues are equal, d is that constant and it is returned.
+     *
+     * @throws InvalidSpecificationException when the probability is outside (0, 1)
      */
     public double quantile(double probability) {
         if (!(probability > 0 && probability < 1)) {
