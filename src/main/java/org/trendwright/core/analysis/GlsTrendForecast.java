@@ -15,22 +15,29 @@ import org.trendwright.core.trend.TrendFit;
  * is {@link Ar1GlsForecast}'s. For a log-scale model that forecast is of ln y: the intervals map
  * back by e^x, and the point value is Duan's (1983) smearing mean e^m (1/n) sum e^(u_i) over the
  * GLS innovations u_i, matching the least-squares log model's convention.
+ *
+ * @param forecast        the forecast on the series' own scale
+ * @param backTransformed for a log-scale model, each point's three back-transformations; else empty
  */
-record GlsTrendForecast(Forecast forecast, List<BackTransformed> backTransformed) {
+public record GlsTrendForecast(Forecast forecast, List<BackTransformed> backTransformed) {
 
-    static GlsTrendForecast of(TrendFit fit, Ar1GlsFit gls, TrendAnalysisSpec spec) {
-        int horizon = spec.horizon();
+    public GlsTrendForecast {
+        backTransformed = List.copyOf(backTransformed);
+    }
+
+    /** Forecasts {@code horizon} periods after the trend fit's last observation. */
+    public static GlsTrendForecast of(TrendFit fit, Ar1GlsFit gls, int horizon, List<Double> levels) {
         double[][] rows = new double[horizon][];
         int[] times = new int[horizon];
         for (int h = 1; h <= horizon; h++) {
             times[h - 1] = fit.series().lastTime() + h;
             rows[h - 1] = fit.regressorsAt(times[h - 1]);
         }
-        double[] levels = spec.levels().stream().mapToDouble(Double::doubleValue).toArray();
-        Forecast onFittedScale = Ar1GlsForecast.forecast(gls, rows, times, levels);
-        String model = spec.trend().description() + " with AR(1) errors (" + gls.method().name().toLowerCase()
+        double[] levelArray = levels.stream().mapToDouble(Double::doubleValue).toArray();
+        Forecast onFittedScale = Ar1GlsForecast.forecast(gls, rows, times, levelArray);
+        String model = fit.spec().description() + " with AR(1) errors (" + gls.method().name().toLowerCase()
                 .replace('_', '-') + ")";
-        if (!spec.trend().logScale()) {
+        if (!fit.spec().logScale()) {
             return new GlsTrendForecast(new Forecast(model, onFittedScale.points()), List.of());
         }
         return backTransform(onFittedScale, gls, model);

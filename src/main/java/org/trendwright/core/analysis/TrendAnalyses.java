@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.trendwright.core.InvalidSpecificationException;
 import org.trendwright.core.ModelException;
 import org.trendwright.core.Observations;
+import org.trendwright.core.TestResult;
 import org.trendwright.core.diagnostics.ArchTest;
 import org.trendwright.core.diagnostics.BreuschGodfrey;
 import org.trendwright.core.diagnostics.BreuschGodfreyResult;
@@ -51,6 +52,19 @@ public final class TrendAnalyses {
             case COCHRANE_ORCUTT -> gls(fit, spec, Ar1Method.COCHRANE_ORCUTT, diagnostics, notes);
             case PRAIS_WINSTEN -> gls(fit, spec, Ar1Method.PRAIS_WINSTEN, diagnostics, notes);
         };
+    }
+
+    /**
+     * The serial-correlation checks (exact Durbin-Watson, Breusch-Godfrey at the seasonal order,
+     * Ljung-Box) of a least-squares trend fit at the given level; empty when the series has a gap
+     * or is too short for them.
+     */
+    public static List<TestResult> serialCorrelationChecks(TrendFit fit, double level) {
+        TrendAnalysisSpec spec = TrendAnalysisSpec.of(fit.spec());
+        TrendAnalysisSpec atLevel = new TrendAnalysisSpec(spec.trend(), spec.errors(), spec.hacLag(),
+                spec.serialCorrelationOrder(), spec.horizon(), spec.levels(), level);
+        return diagnose(fit, atLevel, new ArrayList<>()).map(ResidualDiagnostics::serialCorrelationChecks)
+                .orElse(List.of());
     }
 
     /** The residual checks of a least-squares fit, or empty with a note saying why they were skipped. */
@@ -112,7 +126,7 @@ public final class TrendAnalyses {
             notes.add("The GLS iterations did not settle within " + gls.iterations()
                     + " rounds; the reported rho is the last one reached.");
         }
-        GlsTrendForecast forecast = GlsTrendForecast.of(fit, gls, spec);
+        GlsTrendForecast forecast = GlsTrendForecast.of(fit, gls, spec.horizon(), spec.levels());
         return new TrendAnalysis(spec, fit, gls.coefficients(), forecast.forecast(), forecast.backTransformed(),
                 diagnostics, Optional.empty(), Optional.of(gls), notes);
     }
