@@ -14,4 +14,22 @@ package org.trendwright.core.trend;
  * </ul>
  */
 public record BackTransformed(double median, double lognormalMean, double smearingMean) {
+
+    /**
+     * The three back-transformations of a log-scale prediction m, given the log-scale residual
+     * variance s^2 and the smearing factor (1/n) sum e^(e_i).
+     */
+    public static BackTransformed of(double m, double logVariance, double smearingFactor) {
+        double median = Math.exp(m);
+        return new BackTransformed(median, Math.exp(m + logVariance / 2), median * smearingFactor);
+    }
+
+    /** Duan's (1983) smearing factor (1/n) sum e^(e_i) of log-scale residuals. */
+    public static double smearingFactor(double[] logResiduals) {
+        double sum = 0;
+        for (double e : logResiduals) {
+            sum += Math.exp(e);
+        }
+        return sum / logResiduals.length;
+    }
 }

@@ -50,6 +50,11 @@ public record TrendFit(TrendSpec spec, Observations series, OlsFit ols, Optional
         return ols.residuals();
     }
 
+    /** The regressor row x(t) of this model for period index t (in-sample or future). */
+    public double[] regressorsAt(int t) {
+        return TrendDesign.of(spec, series).row(t);
+    }
+
     /** Predicts period t (any t; t beyond the last observation is a forecast). */
     public TrendForecast predict(int t, List<Double> levels) {
         return predictAll(new int[] {t}, levels);
@@ -86,7 +91,7 @@ public record TrendFit(TrendSpec spec, Observations series, OlsFit ols, Optional
             }
             double value = m;
             if (spec.logScale()) {
-                BackTransformed b = Trends.backTransform(m, ols.residualVariance(), smearingFactor);
+                BackTransformed b = BackTransformed.of(m, ols.residualVariance(), smearingFactor);
                 back.add(b);
                 value = b.smearingMean();
             }

@@ -53,12 +53,12 @@ public final class Trends {
     }
 
     private static TrendFit logScaleFit(Observations series, TrendSpec spec, OlsFit ols) {
-        double smearing = smearingFactor(ols.residuals());
+        double smearing = BackTransformed.smearingFactor(ols.residuals());
         double[] logFitted = ols.fitted();
         double[] fitted = new double[logFitted.length];
         List<BackTransformed> back = new ArrayList<>(logFitted.length);
         for (int i = 0; i < logFitted.length; i++) {
-            BackTransformed b = backTransform(logFitted[i], ols.residualVariance(), smearing);
+            BackTransformed b = BackTransformed.of(logFitted[i], ols.residualVariance(), smearing);
             back.add(b);
             fitted[i] = b.smearingMean();
         }
@@ -87,18 +87,4 @@ public final class Trends {
         return new GrowthRate(Math.expm1(slope.estimate()), Math.expm1(slope.lower95()), Math.expm1(slope.upper95()));
     }
 
-    /** Duan's (1983) smearing factor (1/n) sum e^(e_i) of the log-scale residuals. */
-    static double smearingFactor(double[] logResiduals) {
-        double sum = 0;
-        for (double e : logResiduals) {
-            sum += Math.exp(e);
-        }
-        return sum / logResiduals.length;
-    }
-
-    /** The median, lognormal-mean and smearing back-transformations of a log-scale prediction m. */
-    static BackTransformed backTransform(double m, double logVariance, double smearingFactor) {
-        double median = Math.exp(m);
-        return new BackTransformed(median, Math.exp(m + logVariance / 2), median * smearingFactor);
-    }
 }

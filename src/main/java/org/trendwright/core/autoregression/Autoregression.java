@@ -1,0 +1,131 @@
+package org.trendwright.core.autoregression;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.IntStream;
+import org.trendwright.core.InsufficientDataException;
+import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.Observations;
+import org.trendwright.core.regression.Design;
+import org.trendwright.core.regression.LeastSquares;
+import org.trendwright.core.regression.OlsFit;
+
+/**
+ * Autoregressions with a constant, y_t = b0 + Σ_{i ∈ lags} b_i y_{t−i} + e_t, fitted by conditional
+ * least squares: OLS of y_t on 1 and its lags over t = m+1..n, m the largest lag, treating the
+ * first m observations as fixed (Box & Jenkins 1970, Time Series Analysis: Forecasting and
+ * Control, Holden-Day, section 7.1; for a Gaussian AR this is maximum likelihood conditional on
+ * them). The same on first differences when the spec asks for it.
+ *
+ * <p>Lags are 1..p, plus the seasonal lag s (= periods per year) when asked for: a subset AR such
+ * as lags {1, 4} for quarterly or {1, 12} for monthly data. With AIC or BIC every order
+ * 0..pMax is fitted on the same sample (the first max(pMax, s) observations dropped; see
+ * {@link LagSelection}), and the chosen order is then refitted on every observation it can use.
+ *
+ * <p>Stateless and thread-safe.
+ */
+public final class Autoregression {
+
+    private Autoregression() {
+    }
+
+    /**
+     * Fits the autoregression the spec describes.
+     *
+     * @throws InvalidSpecificationException when the series has a gap (the message names the first
+     *         missing period) or a seasonal lag is asked for on annual data
+     * @throws InsufficientDataException when, after dropping the first max-lag observations, the
+     *         largest model would not have at least one residual degree of freedom
+     * @throws org.trendwright.core.RankDeficientDesignException when a lag column duplicates the
+     *         constant, as for a series that is constant after its start
+     */
+    public static ArFit fit(Observations series, ArSpec spec) {
+        LagDesigns.requireConsecutive(series, "An autoregression");
+        int seasonal = seasonalLag(series, spec);
+        double[] w = series.values();
+        w = spec.differenced() ? LagDesigns.differences(w) : w;
+        int commonStart = Math.max(spec.order(), seasonal);
+        checkLength(series.size(), w.length, commonStart, lags(spec.order(), seasonal).length, spec);
+        int order = spec.order();
+        List<CandidateOrder> candidates = List.of();
+        if (spec.selection() != LagSelection.FIXED) {
+            candidates = compareOrders(w, spec.order(), seasonal, commonStart);
+            order = OrderSelection.choose(candidates, spec.selection());
+        }
+        int[] lags = lags(order, seasonal);
+        int start = lags.length == 0 ? 0 : lags[lags.length - 1];
+        OlsFit regression = LeastSquares.fit(design(w, lags, start), LagDesigns.lagged(w, 0, start));
+        if (spec.selection() == LagSelection.FIXED) {
+            candidates = List.of(new CandidateOrder(order, regression.observations(), regression.aic(),
+                    regression.bic()));
+        }
+        return assemble(series, spec, order, lags, regression, candidates);
+    }
+
+    private static ArFit assemble(Observations series, ArSpec spec, int order, int[] lags, OlsFit regression,
+                                  List<CandidateOrder> candidates) {
+        int maxLag = Autocorrelations.defaultMaxLag(regression.observations(), series.periodsPerYear());
+        List<ResidualAutocorrelation> autocorrelations = Autocorrelations.ofResiduals(regression.residuals(), maxLag);
+        double constant = regression.coefficients().get(0).estimate();
+        Stationarity stationarity = CharacteristicRoots.assess(constant, ArFit.phiByLag(lags, regression),
+                spec.differenced());
+        return new ArFit(series, spec, order, lags, regression, candidates, autocorrelations, stationarity);
+    }
+
+    /** The lags 1..p, with the seasonal lag s appended when s > p (s = 0: none). */
+    static int[] lags(int order, int seasonal) {
+        IntStream lags = IntStream.rangeClosed(1, order);
+        return seasonal > order ? IntStream.concat(lags, IntStream.of(seasonal)).toArray() : lags.toArray();
+    }
+
+    /**
+     * Criteria of the orders 0..maxOrder on the common sample t = start..: the columns are put in
+     * nesting order (constant, seasonal lag, then lags 1..maxOrder without the seasonal one), so
+     * that order p uses the first 1 + |lags(p)| of them.
+     */
+    private static List<CandidateOrder> compareOrders(double[] w, int maxOrder, int seasonal, int start) {
+        IntStream others = IntStream.rangeClosed(1, maxOrder).filter(lag -> lag != seasonal);
+        int[] nestingOrder = seasonal > 0 ? IntStream.concat(IntStream.of(seasonal), others).toArray()
+                                          : others.toArray();
+        int[] widths = IntStream.rangeClosed(0, maxOrder).map(p -> 1 + lags(p, seasonal).length).toArray();
+        return OrderSelection.compareNested(design(w, nestingOrder, start), LagDesigns.lagged(w, 0, start), widths);
+    }
+
+    /** The regressors 1 and w_{t−i}, i in lags (in that order), for t = start..end (0-based). */
+    private static Design design(double[] w, int[] lags, int start) {
+        int rows = w.length - start;
+        List<double[]> columns = new ArrayList<>(lags.length + 1);
+        List<String> names = new ArrayList<>(lags.length + 1);
+        columns.add(LagDesigns.ones(rows));
+        names.add("constant");
+        for (int lag : lags) {
+            columns.add(LagDesigns.lagged(w, lag, start));
+            names.add("lag " + lag);
+        }
+        return new Design(columns, names, true);
+    }
+
+    private static int seasonalLag(Observations series, ArSpec spec) {
+        if (!spec.seasonalLag()) {
+            return 0;
+        }
+        if (series.periodsPerYear() < 2) {
+            throw new InvalidSpecificationException("A seasonal lag needs a series with seasons (quarterly, monthly,"
+                    + " ...), but this one has " + series.periodsPerYear()
+                    + " period per year; drop the seasonal lag.");
+        }
+        return series.periodsPerYear();
+    }
+
+    /** Needs at least one residual degree of freedom for the largest model on the common sample. */
+    private static void checkLength(int size, int workingLength, int start, int lagCount, ArSpec spec) {
+        int coefficients = lagCount + 1;
+        int needed = start + coefficients + 1;
+        if (workingLength < needed) {
+            int extra = size - workingLength;
+            String what = "An autoregression with " + lagCount + " lags (largest lag " + start + ")"
+                    + (spec.differenced() ? " on first differences" : "");
+            throw InsufficientDataException.forModel(what, needed + extra, size);
+        }
+    }
+}
