@@ -15,16 +15,20 @@ import java.util.List;
  * @param coefficients the estimated coefficients with their inference
  * @param statistics   goodness of fit and information criteria
  * @param growthRate   for a log-linear trend, the growth per period; null otherwise
- * @param tests        residual tests, each with its decision and a plain reading
- * @param robust       Newey-West (HAC) standard errors, or null when they could not be computed
- * @param notes        why a check is missing (gaps, too few observations), in plain words
+ * @param errors       how the errors were treated for the coefficients and the forecast
+ * @param tests        every test run: residual checks of the least-squares fit, then the unit-root
+ *                     and break screens of the series, each with its decision and a plain reading
+ * @param durbinWatson the exact Durbin-Watson test in detail, or null when it was skipped
+ * @param screening    what the screens of the series found
+ * @param notes        what was skipped or assumed, and why, in plain words
  * @param forecast     one row per future period
- * @param chart        actual, fitted, residuals and forecast bands, aligned by period
+ * @param chart        actual, fitted, residuals, residual autocorrelations and forecast bands
  */
 public record FitResponse(SeriesRef series, ModelSpec model, int horizon, List<Double> levels,
                           double significanceLevel, String description, List<CoefficientRow> coefficients,
-                          Statistics statistics, Growth growthRate, List<Test> tests, Robust robust,
-                          List<String> notes, List<ForecastRow> forecast, Chart chart) {
+                          Statistics statistics, Growth growthRate, ErrorTreatmentBody errors, List<Test> tests,
+                          DurbinWatsonDetail durbinWatson, Screening screening, List<String> notes,
+                          List<ForecastRow> forecast, Chart chart) {
 
     /**
      * One hypothesis test as the core reports it; {@code decision} is "reject" or "do-not-reject"
@@ -35,8 +39,30 @@ public record FitResponse(SeriesRef series, ModelSpec model, int horizon, List<D
                        String reading) {
     }
 
-    /** Coefficients with heteroskedasticity- and autocorrelation-consistent standard errors. */
-    public record Robust(String method, int lag, String lagRule, List<CoefficientRow> coefficients) {
+    /**
+     * The error treatment: "classical", "newey-west" (with its lag), or "cochrane-orcutt" /
+     * "prais-winsten" (feasible GLS for AR(1) errors, with rho and the transformed regression's
+     * standard error of estimate and Durbin-Watson statistic). Fields that do not apply are null.
+     */
+    public record ErrorTreatmentBody(String treatment, Integer lag, String lagRule, Double rho,
+                                     Double rhoStandardError, Integer iterations, Boolean converged,
+                                     Double standardErrorOfEstimate, Double durbinWatson) {
+    }
+
+    /**
+     * The exact Durbin-Watson test: p-values against positive and negative correlation, the
+     * bounds dL, dU at the test level (null when the design has no constant), both bounds
+     * verdicts ("reject", "inconclusive", "do-not-reject", "not-applicable"), the exact verdict
+     * ("positive-serial-correlation", "negative-serial-correlation", "none-detected") and its
+     * reading.
+     */
+    public record DurbinWatsonDetail(double statistic, double pValuePositive, double pValueNegative, double level,
+                                     Double lowerBound, Double upperBound, String boundsVerdictPositive,
+                                     String boundsVerdictNegative, String verdict, String reading) {
+    }
+
+    /** The screens of the series: lags of the unit-root test, and where a trend break would start. */
+    public record Screening(Integer unitRootLags, String breakPeriod) {
     }
 
     /** The fitted data. */
@@ -82,10 +108,13 @@ public record FitResponse(SeriesRef series, ModelSpec model, int horizon, List<D
     }
 
     /**
-     * Chart data: observed periods with actual, fitted (original scale) and residual (model scale)
-     * values, then the forecast periods with point forecasts and one band per level.
+     * Chart data: observed periods with actual, fitted (original scale) and least-squares residual
+     * (model scale) values; residual autocorrelations r_1.. with the +-2/sqrt(n) band (empty and
+     * null when the checks were skipped); then the forecast periods with point forecasts and one
+     * band per level.
      */
     public record Chart(List<String> periods, double[] actual, double[] fitted, double[] residuals,
-                        String residualScale, List<String> forecastPeriods, double[] forecast, List<Band> bands) {
+                        String residualScale, double[] autocorrelations, Double autocorrelationBand,
+                        List<String> forecastPeriods, double[] forecast, List<Band> bands) {
     }
 }

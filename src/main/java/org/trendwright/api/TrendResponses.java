@@ -2,18 +2,28 @@ package org.trendwright.api;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.trendwright.core.Observations;
+import org.trendwright.core.analysis.ResidualDiagnostics;
+import org.trendwright.core.analysis.SeriesScreening;
+import org.trendwright.core.analysis.SeriesScreens;
+import org.trendwright.core.analysis.TrendAnalyses;
+import org.trendwright.core.analysis.TrendAnalysis;
+import org.trendwright.core.analysis.TrendAnalysisSpec;
 import org.trendwright.core.diagnostics.DurbinWatson;
 import org.trendwright.core.forecast.ForecastPoint;
 import org.trendwright.core.regression.Coefficient;
 import org.trendwright.core.regression.OlsFit;
+import org.trendwright.core.trend.BackTransformed;
 import org.trendwright.core.trend.TrendFit;
-import org.trendwright.core.trend.TrendForecast;
-import org.trendwright.core.trend.Trends;
 import org.trendwright.series.Period;
 import org.trendwright.series.SeriesVersions;
 
-/** Fits a trend model with the core and maps its records onto {@link FitResponse}. Stateless and thread-safe. */
+/**
+ * Runs the core's trend analysis (fit, error treatment, residual checks, forecast) and its screens
+ * of the series (unit root, trend break), and maps the results onto {@link FitResponse}.
+ * Stateless and thread-safe.
+ */
 final class TrendResponses {
 
     private TrendResponses() {
@@ -21,14 +31,19 @@ final class TrendResponses {
 
     static FitResponse fit(FitResponse.SeriesRef ref, Period first, Observations series, TrendModel model,
                            FitRequest request) {
-        TrendFit fit = Trends.fit(series, model.toSpec());
-        TrendForecast forecast = fit.forecast(request.horizon(), request.levels());
-        List<FitResponse.ForecastRow> rows = forecastRows(first, forecast);
-        ResidualChecks.Result checks = ResidualChecks.of(fit.ols(), series, request.significanceLevel());
+        TrendAnalysisSpec spec = model.toSpec(request.horizon(), request.levels(), request.significanceLevel());
+        TrendAnalysis analysis = TrendAnalyses.analyze(series, spec);
+        SeriesScreening screening = SeriesScreens.screen(series, spec.trend().logScale(), spec.level());
+        TrendFit fit = analysis.fit();
+        List<FitResponse.ForecastRow> rows = forecastRows(first, analysis);
+        List<String> notes = new ArrayList<>(analysis.notes());
+        notes.addAll(screening.notes());
         return new FitResponse(ref, model, request.horizon(), request.levels(), request.significanceLevel(),
-                fit.spec().description(), rows(fit.ols().coefficients()), statistics(fit, series),
+                fit.spec().description(), rows(analysis.coefficients()), statistics(fit, series),
                 fit.growthRate().map(g -> new FitResponse.Growth(g.perPeriod(), g.lower95(), g.upper95())).orElse(null),
-                checks.tests(), checks.robust(), checks.notes(), rows, chart(first, series, fit, rows, request.levels()));
+                CheckBodies.treatment(analysis), CheckBodies.tests(analysis.diagnostics(), screening),
+                CheckBodies.durbinWatson(analysis.diagnostics()), CheckBodies.screening(screening, first), notes, rows,
+                chart(first, series, fit, analysis.diagnostics(), rows, request.levels()));
     }
 
     static List<FitResponse.CoefficientRow> rows(List<Coefficient> coefficients) {
@@ -36,6 +51,7 @@ final class TrendResponses {
                 c.standardError(), c.tStatistic(), c.pValue(), c.lower95(), c.upper95())).toList();
     }
 
+    /** Statistics of the least-squares fit (also under Newey-West or GLS, whose checks test it). */
     private static FitResponse.Statistics statistics(TrendFit fit, Observations series) {
         OlsFit ols = fit.ols();
         boolean log = fit.spec().logScale();
@@ -48,22 +64,23 @@ final class TrendResponses {
                 log ? fit.smearingFactor() : null);
     }
 
-    private static List<FitResponse.ForecastRow> forecastRows(Period first, TrendForecast forecast) {
-        List<ForecastPoint> points = forecast.forecast().points();
+    private static List<FitResponse.ForecastRow> forecastRows(Period first, TrendAnalysis analysis) {
+        List<ForecastPoint> points = analysis.forecast().points();
+        List<BackTransformed> back = analysis.backTransformed();
         List<FitResponse.ForecastRow> rows = new ArrayList<>(points.size());
         for (int i = 0; i < points.size(); i++) {
             ForecastPoint p = points.get(i);
-            var back = forecast.backTransformed().isEmpty() ? null : forecast.backTransformed().get(i);
+            BackTransformed b = back.isEmpty() ? null : back.get(i);
             rows.add(new FitResponse.ForecastRow(SeriesVersions.periodAt(first, p.time()).label(), p.horizon(),
                     p.value(), p.standardError(),
                     p.intervals().stream().map(v -> new FitResponse.Interval(v.level(), v.lower(), v.upper())).toList(),
-                    back == null ? null
-                            : new FitResponse.BackTransform(back.median(), back.lognormalMean(), back.smearingMean())));
+                    b == null ? null : new FitResponse.BackTransform(b.median(), b.lognormalMean(), b.smearingMean())));
         }
         return rows;
     }
 
     private static FitResponse.Chart chart(Period first, Observations series, TrendFit fit,
+                                           Optional<ResidualDiagnostics> diagnostics,
                                            List<FitResponse.ForecastRow> rows, List<Double> levels) {
         List<String> periods = new ArrayList<>(series.size());
         for (int i = 0; i < series.size(); i++) {
@@ -76,8 +93,11 @@ final class TrendResponses {
                     rows.stream().mapToDouble(r -> r.intervals().get(level).lower()).toArray(),
                     rows.stream().mapToDouble(r -> r.intervals().get(level).upper()).toArray()));
         }
+        double[] autocorrelations = diagnostics.map(d -> d.correlogram().autocorrelations()).orElse(new double[0]);
+        Double band = diagnostics.map(d -> d.correlogram().bandHalfWidth()).orElse(null);
         return new FitResponse.Chart(periods, series.values(), fit.fitted(), fit.residuals(),
-                fit.spec().logScale() ? "log" : "level", rows.stream().map(FitResponse.ForecastRow::period).toList(),
+                fit.spec().logScale() ? "log" : "level", autocorrelations, band,
+                rows.stream().map(FitResponse.ForecastRow::period).toList(),
                 rows.stream().mapToDouble(FitResponse.ForecastRow::value).toArray(), bands);
     }
 }

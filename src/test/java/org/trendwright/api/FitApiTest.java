@@ -3,7 +3,11 @@ package org.trendwright.api;
 import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.equalTo;
+import static org.hamcrest.Matchers.greaterThan;
+import static org.hamcrest.Matchers.hasItem;
 import static org.hamcrest.Matchers.hasSize;
+import static org.hamcrest.Matchers.oneOf;
+import static org.hamcrest.Matchers.startsWith;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import io.restassured.path.json.JsonPath;
@@ -84,7 +88,9 @@ class FitApiTest {
                     .body("forecast[0].value", closeTo(1 + 22 + 22 * 22, 1e-6))
                     .body("chart.periods", hasSize(query.isEmpty() ? 21 : 20))
                     .body("series.hasGaps", equalTo(!query.isEmpty()))
-                    .body("notes[0]", containsString(query.isEmpty() ? "exact" : "gaps"));
+                    .body("notes[0]", containsString(query.isEmpty() ? "residual checks were skipped"
+                            : "t = 11 is missing"))
+                    .body("durbinWatson", equalTo(null));
         }
     }
 
@@ -104,11 +110,11 @@ class FitApiTest {
                 + observations + "]}, \"model\"");
         JsonPath posted = server.given().contentType("application/json").body(body).post("/api/fit").then()
                 .statusCode(200).extract().jsonPath();
-        assertEquals(List.of("Breusch-Godfrey LM (order 4)", "Breusch-Godfrey F (order 4)", "Ljung-Box Q (2 lags)",
-                "ARCH LM (order 4)"), stored.getList("tests.test"));
-        assertEquals("Newey-West", stored.getString("robust.method"));
-        for (String part : List.of("model", "coefficients", "statistics", "growthRate", "tests", "robust", "notes",
-                "forecast", "chart")) {
+        assertEquals(List.of("Durbin-Watson", "Breusch-Godfrey LM (order 4)", "Breusch-Godfrey F (order 4)",
+                "Ljung-Box Q (2 lags)", "ARCH LM (order 1)"), stored.getList("tests.test"));
+        assertEquals("classical", stored.getString("errors.treatment"));
+        for (String part : List.of("model", "coefficients", "statistics", "growthRate", "errors", "tests",
+                "durbinWatson", "screening", "notes", "forecast", "chart")) {
             assertEquals(stored.getString(part), posted.getString(part), part);
         }
         assertEquals("Kettles", posted.getString("series.name"));
@@ -149,6 +155,33 @@ class FitApiTest {
                 .body("type", equalTo("urn:trendwright:problem:invalid-specification"));
         server.given().get("/metrics").then()
                 .body(containsString("trendwright_fits_seconds_count{cache=\"miss\",family=\"trend\",outcome=\"refused\"} 4"));
+    }
+
+    @Test
+    void treats_serially_correlated_errors_and_screens_the_series_on_request() {
+        byte[] demo = org.trendwright.demo.DemoDataGenerator.files().get("brindlewood-long.csv");
+        String filters = server.given().contentType("text/csv").body(demo).post("/api/series").then().statusCode(201)
+                .extract().path("series[0].id").toString();
+        // Seeded simulation (DemoDataGenerator): Water filters' level rises 35% from 2019-Q3, about
+        // seven noise standard deviations, so the sup-F search finds it to within a quarter.
+        fit(filters, 1, "{\"model\": {\"family\": \"trend\"}}").then().statusCode(200)
+                .body("errors.treatment", equalTo("classical"))
+                .body("tests.test", hasItem(startsWith("Augmented Dickey-Fuller")))
+                .body("tests.test", hasItem(startsWith("sup-F")))
+                .body("screening.breakPeriod", oneOf("2019-Q2", "2019-Q3", "2019-Q4"))
+                .body("durbinWatson.verdict", oneOf("positive-serial-correlation", "none-detected",
+                        "negative-serial-correlation"))
+                .body("chart.autocorrelations.size()", greaterThan(0));
+        fit(filters, 1, "{\"model\": {\"family\": \"trend\", \"errors\": \"prais-winsten\"}}").then()
+                .statusCode(200).body("errors.treatment", equalTo("prais-winsten"))
+                .body("errors.rho", greaterThan(0.0)).body("errors.converged", equalTo(true));
+        fit(filters, 1, "{\"model\": {\"family\": \"trend\", \"errors\": \"newey-west\", \"hacLag\": 3}}")
+                .then().statusCode(200).body("errors.lag", equalTo(3))
+                .body("notes", hasItem(containsString("Newey-West errors correct")));
+        fit(filters, 1, "{\"model\": {\"family\": \"trend\", \"hacLag\": 3}}").then().statusCode(400)
+                .body("field", equalTo("model.hacLag"));
+        fit(filters, 1, "{\"model\": {\"family\": \"trend\", \"errors\": \"robust\"}}").then().statusCode(400)
+                .body("field", equalTo("model.errors"));
     }
 
     @Test

@@ -42,7 +42,8 @@ class JsonMappingTest {
                 + " \"scale\": \"level\", \"seasonal\": false}, \"horizon\": 8, \"levels\": [0.95, 0.8]}",
                 FitRequest.class);
         assertEquals(mapper.writeValueAsString(terse.normalized()), mapper.writeValueAsString(spelled.normalized()));
-        assertEquals("{\"model\":{\"family\":\"trend\",\"shape\":\"linear\",\"scale\":\"level\",\"seasonal\":false},"
+        assertEquals("{\"model\":{\"family\":\"trend\",\"shape\":\"linear\",\"scale\":\"level\",\"seasonal\":false,"
+                + "\"errors\":\"classical\",\"hacLag\":null},"
                 + "\"horizon\":8,\"levels\":[0.8,0.95],\"significanceLevel\":0.05}", mapper.writeValueAsString(terse.normalized()));
     }
 }
