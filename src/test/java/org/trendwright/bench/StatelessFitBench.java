@@ -32,7 +32,7 @@ import org.trendwright.app.TrendwrightApp;
  * trend with seasonal dummies, seeded AR(1) noise) under a seasonal linear trend model with the
  * default 8-step forecast. Each sample is one HTTP round trip on the loopback interface from a
  * single client thread, so the reported percentiles bound the server's own time from above.
- * Sample-time mode over 5 measured iterations of 5 s gives over 10,000 samples at a few
+ * Sample-time mode over 5 measured iterations of 8 s gives over 10,000 samples at a few
  * milliseconds each. At tear-down the server's own timer (http_server_requests for /api/fit) is
  * printed: count, sum and max, and the p50 and p99 read off its histogram (the upper bound of the
  * bucket holding that quantile; warm-up requests included).
@@ -41,7 +41,7 @@ import org.trendwright.app.TrendwrightApp;
 @BenchmarkMode(Mode.SampleTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 3, time = 2)
-@Measurement(iterations = 5, time = 5)
+@Measurement(iterations = 5, time = 8)
 @Fork(1)
 public class StatelessFitBench {
 
