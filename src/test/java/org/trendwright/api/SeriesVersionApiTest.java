@@ -115,6 +115,8 @@ class SeriesVersionApiTest {
         String id = createKettles();
         server.given().delete("/api/series/" + id).then().statusCode(428);
         server.given().header("If-Match", "\"s" + id + "-v7\"").delete("/api/series/" + id).then().statusCode(412);
+        server.given().header("If-Match", "W/\"something-else\"").delete("/api/series/" + id).then().statusCode(412)
+                .body("detail", containsString("If-Match names no version of series " + id));
         server.given().header("If-Match", "\"s" + id + "-v1\"").delete("/api/series/" + id).then().statusCode(204);
         server.given().get("/api/series/" + id).then().statusCode(404);
     }
