@@ -6,6 +6,9 @@ import io.micrometer.core.instrument.MeterRegistry;
 import io.micrometer.core.instrument.Timer;
 import java.util.List;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.Supplier;
 import org.trendwright.core.ModelException;
 import org.trendwright.core.Observations;
@@ -18,7 +21,9 @@ import org.trendwright.store.FitResultRepository;
 /**
  * Runs fits and keeps the results of stored versions: a (series version, normalized model request)
  * pair is computed once, its JSON stored, and every later request for the pair answered with the
- * stored JSON unchanged. The stateless fit computes every time and stores nothing. Fit counts and
+ * stored JSON unchanged. Concurrent requests for the same pair in one instance wait for the one
+ * computing it; two instances on one PostgreSQL store may each compute it once, and the first
+ * stored answer wins. The stateless fit computes every time and stores nothing. Fit counts and
  * times are recorded as the timer {@code trendwright.fits} (tags family, cache, outcome).
  * Thread-safe.
  */
@@ -31,6 +36,8 @@ final class FitService {
     private final FitResultRepository results;
     private final ObjectMapper mapper;
     private final MeterRegistry registry;
+    /** Fits being computed now, so that concurrent requests for one pair compute it once. */
+    private final ConcurrentHashMap<String, CompletableFuture<String>> inFlight = new ConcurrentHashMap<>();
 
     FitService(FitResultRepository results, ObjectMapper mapper, MeterRegistry registry) {
         this.results = results;
@@ -49,11 +56,34 @@ final class FitService {
             timer(family, "hit", "fitted").record(System.nanoTime() - start, java.util.concurrent.TimeUnit.NANOSECONDS);
             return new Answer(hit.get(), true);
         }
-        FitResponse.SeriesRef ref = ref(version.seriesId(), version.version(), version.name(), version.frequency(),
-                version.points());
-        String json = json(timed(family, "miss", () -> fit(ref, version.frequency(), version.points(), request)));
-        results.save(version.seriesId(), version.version(), key, json);
-        return new Answer(json, false);
+        String flight = version.seriesId() + "/" + version.version() + "/" + key;
+        CompletableFuture<String> mine = new CompletableFuture<>();
+        CompletableFuture<String> running = inFlight.putIfAbsent(flight, mine);
+        if (running != null) {
+            return new Answer(awaitOther(running), true);
+        }
+        try {
+            FitResponse.SeriesRef ref = ref(version.seriesId(), version.version(), version.name(),
+                    version.frequency(), version.points());
+            String json = json(timed(family, "miss", () -> fit(ref, version.frequency(), version.points(), request)));
+            results.save(version.seriesId(), version.version(), key, json);
+            mine.complete(json);
+            return new Answer(json, false);
+        } catch (RuntimeException e) {
+            mine.completeExceptionally(e);
+            throw e;
+        } finally {
+            inFlight.remove(flight, mine);
+        }
+    }
+
+    /** The answer another request of this instance is computing for the same pair, or its failure. */
+    private static String awaitOther(CompletableFuture<String> running) {
+        try {
+            return running.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof RuntimeException cause ? cause : e;
+        }
     }
 
     FitResponse stateless(String name, Frequency frequency, List<Point> points, FitRequest raw) {

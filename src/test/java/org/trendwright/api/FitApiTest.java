@@ -138,6 +138,27 @@ class FitApiTest {
     }
 
     @Test
+    void concurrent_requests_for_one_pair_compute_it_once() throws Exception {
+        String id = upload(QUARTERS, "");
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(6);
+        List<java.util.concurrent.Callable<Response>> calls = new java.util.ArrayList<>();
+        for (int i = 0; i < 6; i++) {
+            calls.add(() -> fit(id, 1, MODEL));
+        }
+        List<String> caches = new java.util.ArrayList<>();
+        java.util.Set<String> bodies = new java.util.HashSet<>();
+        for (java.util.concurrent.Future<Response> answer : pool.invokeAll(calls)) {
+            caches.add(answer.get().header("X-Trendwright-Cache"));
+            bodies.add(answer.get().asString());
+        }
+        pool.shutdown();
+        assertEquals(1, caches.stream().filter("miss"::equals).count(), caches.toString());
+        assertEquals(1, bodies.size());
+        server.given().get("/metrics").then()
+                .body(containsString("trendwright_fits_seconds_count{cache=\"miss\",family=\"trend\",outcome=\"fitted\"} 1"));
+    }
+
+    @Test
     void answers_422_with_the_cores_reason_when_the_data_cannot_support_the_model() {
         String withZero = upload("period,value\n2024-01,3\n2024-02,0\n2024-03,5\n2024-04,6\n", "");
         fit(withZero, 1, "{\"model\": {\"family\": \"trend\", \"scale\": \"log\"}}").then().statusCode(422)
