@@ -15,10 +15,11 @@ import java.util.List;
  * @param coefficients the estimated coefficients with their inference
  * @param statistics   goodness of fit and information criteria
  * @param growthRate   for a log-linear trend, the growth per period; null otherwise
- * @param errors       how the errors were treated for the coefficients and the forecast
+ * @param errors       how a trend model's errors were treated; null for other families
  * @param tests        every test run: residual checks of the least-squares fit, then the unit-root
  *                     and break screens of the series, each with its decision and a plain reading
- * @param durbinWatson the exact Durbin-Watson test in detail, or null when it was skipped
+ * @param durbinWatson the exact Durbin-Watson test in detail, or null when it was skipped or does
+ *                     not apply (autoregressions)
  * @param screening    what the screens of the series found
  * @param notes        what was skipped or assumed, and why, in plain words
  * @param forecast     one row per future period

@@ -98,6 +98,9 @@ final class FitService {
         if (request.model() instanceof TrendModel trend) {
             return TrendResponses.fit(ref, points.get(0).period(), series, trend, request);
         }
+        if (request.model() instanceof ArModel ar) {
+            return ArResponses.fit(ref, points.get(0).period(), series, ar, request);
+        }
         throw new IllegalStateException("No fitter for model family " + request.model().family());
     }
 

@@ -9,8 +9,9 @@ import com.fasterxml.jackson.annotation.JsonTypeInfo;
  * record here and one more fitter in {@link FitService}.
  */
 @JsonTypeInfo(use = JsonTypeInfo.Id.NAME, include = JsonTypeInfo.As.PROPERTY, property = "family")
-@JsonSubTypes({@JsonSubTypes.Type(value = TrendModel.class, name = "trend")})
-public sealed interface ModelSpec permits TrendModel {
+@JsonSubTypes({@JsonSubTypes.Type(value = TrendModel.class, name = "trend"),
+    @JsonSubTypes.Type(value = ArModel.class, name = "autoregression")})
+public sealed interface ModelSpec permits TrendModel, ArModel {
 
     /** This spec with every default filled in, so equal models have equal JSON (the cache key). */
     ModelSpec normalized();

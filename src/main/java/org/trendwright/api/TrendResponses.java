@@ -11,6 +11,7 @@ import org.trendwright.core.analysis.TrendAnalyses;
 import org.trendwright.core.analysis.TrendAnalysis;
 import org.trendwright.core.analysis.TrendAnalysisSpec;
 import org.trendwright.core.diagnostics.DurbinWatson;
+import org.trendwright.core.forecast.Forecast;
 import org.trendwright.core.forecast.ForecastPoint;
 import org.trendwright.core.regression.Coefficient;
 import org.trendwright.core.regression.OlsFit;
@@ -35,7 +36,7 @@ final class TrendResponses {
         TrendAnalysis analysis = TrendAnalyses.analyze(series, spec);
         SeriesScreening screening = SeriesScreens.screen(series, spec.trend().logScale(), spec.level());
         TrendFit fit = analysis.fit();
-        List<FitResponse.ForecastRow> rows = forecastRows(first, analysis);
+        List<FitResponse.ForecastRow> rows = forecastRows(first, analysis.forecast(), analysis.backTransformed());
         List<String> notes = new ArrayList<>(analysis.notes());
         notes.addAll(screening.notes());
         return new FitResponse(ref, model, request.horizon(), request.levels(), request.significanceLevel(),
@@ -43,7 +44,7 @@ final class TrendResponses {
                 fit.growthRate().map(g -> new FitResponse.Growth(g.perPeriod(), g.lower95(), g.upper95())).orElse(null),
                 CheckBodies.treatment(analysis), CheckBodies.tests(analysis.diagnostics(), screening),
                 CheckBodies.durbinWatson(analysis.diagnostics()), CheckBodies.screening(screening, first), notes, rows,
-                chart(first, series, fit, analysis.diagnostics(), rows, request.levels()));
+                trendChart(first, series, fit, analysis.diagnostics(), rows, request.levels()));
     }
 
     static List<FitResponse.CoefficientRow> rows(List<Coefficient> coefficients) {
@@ -64,9 +65,9 @@ final class TrendResponses {
                 log ? fit.smearingFactor() : null);
     }
 
-    private static List<FitResponse.ForecastRow> forecastRows(Period first, TrendAnalysis analysis) {
-        List<ForecastPoint> points = analysis.forecast().points();
-        List<BackTransformed> back = analysis.backTransformed();
+    /** One row per forecast point; {@code back} is aligned with the points or empty. */
+    static List<FitResponse.ForecastRow> forecastRows(Period first, Forecast forecast, List<BackTransformed> back) {
+        List<ForecastPoint> points = forecast.points();
         List<FitResponse.ForecastRow> rows = new ArrayList<>(points.size());
         for (int i = 0; i < points.size(); i++) {
             ForecastPoint p = points.get(i);
@@ -79,9 +80,19 @@ final class TrendResponses {
         return rows;
     }
 
-    private static FitResponse.Chart chart(Period first, Observations series, TrendFit fit,
-                                           Optional<ResidualDiagnostics> diagnostics,
-                                           List<FitResponse.ForecastRow> rows, List<Double> levels) {
+    private static FitResponse.Chart trendChart(Period first, Observations series, TrendFit fit,
+                                                Optional<ResidualDiagnostics> diagnostics,
+                                                List<FitResponse.ForecastRow> rows, List<Double> levels) {
+        double[] autocorrelations = diagnostics.map(d -> d.correlogram().autocorrelations()).orElse(new double[0]);
+        Double band = diagnostics.map(d -> d.correlogram().bandHalfWidth()).orElse(null);
+        return chart(first, series, fit.fitted(), fit.residuals(), fit.spec().logScale() ? "log" : "level",
+                autocorrelations, band, rows, levels);
+    }
+
+    /** Chart data of any model: observed periods and values, fit, residuals, forecast and bands. */
+    static FitResponse.Chart chart(Period first, Observations series, double[] fitted, double[] residuals,
+                                   String residualScale, double[] autocorrelations, Double band,
+                                   List<FitResponse.ForecastRow> rows, List<Double> levels) {
         List<String> periods = new ArrayList<>(series.size());
         for (int i = 0; i < series.size(); i++) {
             periods.add(SeriesVersions.periodAt(first, series.timeAt(i)).label());
@@ -93,10 +104,7 @@ final class TrendResponses {
                     rows.stream().mapToDouble(r -> r.intervals().get(level).lower()).toArray(),
                     rows.stream().mapToDouble(r -> r.intervals().get(level).upper()).toArray()));
         }
-        double[] autocorrelations = diagnostics.map(d -> d.correlogram().autocorrelations()).orElse(new double[0]);
-        Double band = diagnostics.map(d -> d.correlogram().bandHalfWidth()).orElse(null);
-        return new FitResponse.Chart(periods, series.values(), fit.fitted(), fit.residuals(),
-                fit.spec().logScale() ? "log" : "level", autocorrelations, band,
+        return new FitResponse.Chart(periods, series.values(), fitted, residuals, residualScale, autocorrelations, band,
                 rows.stream().map(FitResponse.ForecastRow::period).toList(),
                 rows.stream().mapToDouble(FitResponse.ForecastRow::value).toArray(), bands);
     }

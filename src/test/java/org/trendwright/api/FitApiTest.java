@@ -206,6 +206,27 @@ class FitApiTest {
     }
 
     @Test
+    void fits_an_autoregression_through_the_same_endpoint() {
+        byte[] demo = org.trendwright.demo.DemoDataGenerator.files().get("brindlewood-core-lines.csv");
+        String kettles = server.given().contentType("text/csv").body(demo).post("/api/series").then().statusCode(201)
+                .extract().path("series[0].id").toString();
+        fit(kettles, 1, "{\"model\": {\"family\": \"autoregression\", \"order\": 2, \"differenced\": true,"
+                + " \"seasonalLag\": true}, \"horizon\": 4}").then().statusCode(200)
+                .body("model.family", equalTo("autoregression"))
+                .body("coefficients.name", equalTo(List.of("constant", "lag 1", "lag 2", "lag 4")))
+                .body("statistics.observations", equalTo(47 - 4))
+                .body("tests.test", hasItem(startsWith("Ljung-Box")))
+                .body("durbinWatson", equalTo(null)).body("errors", equalTo(null))
+                .body("chart.fitted[3]", equalTo(null)).body("chart.fitted[5]", greaterThan(0.0))
+                .body("forecast.period", equalTo(List.of("2025-Q1", "2025-Q2", "2025-Q3", "2025-Q4")));
+        String gap = upload("period,value\n2024-01,3\n2024-02,\n2024-03,5\n2024-04,6\n2024-05,6\n", "?missing=gap");
+        fit(gap, 1, "{\"model\": {\"family\": \"autoregression\", \"order\": 1}}").then().statusCode(422)
+                .body("type", equalTo("urn:trendwright:problem:invalid-specification"));
+        fit(gap, 1, "{\"model\": {\"family\": \"autoregression\", \"selection\": \"hqc\"}}").then()
+                .statusCode(400).body("field", equalTo("model.selection"));
+    }
+
+    @Test
     void refuses_malformed_fit_requests_with_400_naming_the_field() {
         String id = upload(QUARTERS, "");
         fit(id, 1, "{\"horizon\": 4}").then().statusCode(400).body("field", equalTo("model"));
