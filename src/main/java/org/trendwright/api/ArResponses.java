@@ -48,8 +48,8 @@ final class ArResponses {
     }
 
     private static String description(ArFit fit) {
-        return "AR(" + fit.order() + ") with lags " + Arrays.toString(fit.lags()) + " and a constant"
-                + (fit.differenced() ? ", on first differences" : "") + "; " + fit.stationarity().statement();
+        return "autoregression with a constant and lags " + Arrays.toString(fit.lags())
+                + (fit.differenced() ? ", on first differences" : "");
     }
 
     private static void ljungBox(ArFit fit, Observations series, double level, List<FitResponse.Test> tests,
