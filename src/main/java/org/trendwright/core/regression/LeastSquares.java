@@ -1,13 +1,10 @@
 package org.trendwright.core.regression;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.DecompositionSolver;
-import org.apache.commons.math3.linear.RRQRDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
 import org.apache.commons.math3.special.Beta;
 import org.trendwright.core.InsufficientDataException;
@@ -22,27 +19,33 @@ import org.trendwright.core.RankDeficientDesignException;
  * substitution. Forming X'X squares the condition number; the QR route does not (Golub 1965,
  * "Numerical methods for solving linear least squares problems", Numer. Math. 7).
  *
- * <p>Three further steps buy accuracy on ill-conditioned designs such as high-degree polynomials:
+ * <p>Further steps buy accuracy on ill-conditioned designs such as high-degree polynomials:
  * <ol>
- *   <li>each column is scaled to unit Euclidean length before the decomposition (the fit is
- *       invariant; the scaling is undone afterwards);</li>
- *   <li>columns are pivoted by norm (Businger & Golub 1965), so |R_11| >= |R_22| >= ..., and the
- *       numerical rank is the number of |R_jj| above {@link #RANK_TOLERANCE} times |R_11|;</li>
- *   <li>one step of iterative refinement: the least-squares correction for the residual of the
- *       first solution is added to it (Golub & Wilkinson 1966, Numer. Math. 9).</li>
+ *   <li>each column is scaled by the power of two nearest below its Euclidean length before the
+ *       decomposition; scaling by a power of two is exact, so the scaled problem has the very
+ *       same solution, undone exactly afterwards;</li>
+ *   <li>columns are pivoted as if scaled to unit length (Businger &amp; Golub 1965), so that on
+ *       the unit-scaled factor |R_11| &gt;= |R_22| &gt;= ...; the design counts as rank deficient
+ *       when some |R_jj| falls to {@link #RANK_TOLERANCE} times |R_11| or below;</li>
+ *   <li>the solution is refined through the augmented system with residuals accumulated in
+ *       double-double arithmetic (Björck 1967, BIT 7; see {@link AugmentedRefinement}), which
+ *       also removes the cond(X)^2 ||r|| error term of large-residual problems;</li>
+ *   <li>fitted values, residuals and the sums of squares are accumulated in double-double
+ *       arithmetic (Ogita, Rump &amp; Oishi 2005, SIAM J. Sci. Comput. 26).</li>
  * </ol>
  *
  * <p>(X'X)^-1 = P R^-1 R^-T P' comes from the triangular factor, again without forming X'X.
+ * src/docs/accuracy.md records the digits reached on the NIST StRD linear datasets.
  *
  * <p>Stateless and thread-safe.
  */
 public final class LeastSquares {
 
     /**
-     * Relative rank tolerance on the pivoted, column-scaled R: a diagonal element smaller than
-     * this times the largest marks the column as a linear combination of the others. 1e-13 sits
-     * about 500 ulps above double rounding, so the NIST StRD Filip polynomial (degree 10) still
-     * counts as full rank while exact collinearity is caught.
+     * Relative rank tolerance on the pivoted R of the columns scaled to unit length: a diagonal
+     * element at most this times the largest marks the column as a linear combination of the
+     * others. 1e-13 sits about 500 ulps above double rounding, so the NIST StRD Filip polynomial
+     * (degree 10) still counts as full rank while exact collinearity is caught.
      */
     public static final double RANK_TOLERANCE = 1e-13;
 
@@ -53,7 +56,8 @@ public final class LeastSquares {
      * Fits y = X b + e by least squares.
      *
      * @throws InsufficientDataException    when n <= k (no residual degrees of freedom)
-     * @throws RankDeficientDesignException when a regressor is a linear combination of the others
+     * @throws RankDeficientDesignException when a regressor is zero in every row or a linear
+     *                                      combination of the regressors before it
      * @throws InvalidSpecificationException when y has the wrong length or a non-finite value
      */
     public static OlsFit fit(Design design, double[] y) {
@@ -63,20 +67,25 @@ public final class LeastSquares {
         if (n <= k) {
             throw InsufficientDataException.forModel("A regression on " + k + " regressors", k + 1, n);
         }
-        double[] scale = columnNorms(design);
-        RealMatrix scaled = scaledMatrix(design, scale);
-        RRQRDecomposition qr = new RRQRDecomposition(scaled, 0.0);
-        RealMatrix r = qr.getR().getSubMatrix(0, k - 1, 0, k - 1);
-        int[] pivot = pivotOrder(qr.getP(), k);
-        checkRank(design, r, pivot);
-        double[] b = refinedSolution(qr.getSolver(), scaled, y);
-        double[] estimates = new double[k];
-        for (int j = 0; j < k; j++) {
-            estimates[j] = b[j] / scale[j];
+        double[][] columns = design.columns().toArray(new double[0][]);
+        double[] norms = columnNorms(design, columns);
+        double[] scale = scaleByPowersOfTwo(columns, norms);
+        PivotedQr qr = PivotedQr.factor(columns);
+        double[][] unitR = unitScaledR(qr, norms);
+        checkRank(design, unitR, columns, norms);
+        double[] scaledB = AugmentedRefinement.coefficients(columns, qr, y);
+        double[][] xtxInverse = GramInverse.refined(columns, qr);
+        // With X = Xs S (S the diagonal of scales): b = S^-1 bs and (X'X)^-1 = S^-1 (Xs'Xs)^-1 S^-1.
+        double[] b = new double[k];
+        for (int i = 0; i < k; i++) {
+            b[i] = scaledB[i] / scale[i];
+            for (int j = 0; j < k; j++) {
+                xtxInverse[i][j] = xtxInverse[i][j] / scale[i] / scale[j];
+            }
         }
-        double[][] xtxInverse = xtxInverse(r, pivot, scale);
-        double conditionNumber = new SingularValueDecomposition(r).getConditionNumber();
-        return summarize(design, y, estimates, xtxInverse, conditionNumber);
+        double conditionNumber = new SingularValueDecomposition(new Array2DRowRealMatrix(unitR, false))
+                .getConditionNumber();
+        return summarize(design, columns, y, scaledB, b, xtxInverse, conditionNumber);
     }
 
     private static void checkInput(Design design, double[] y) {
@@ -100,10 +109,11 @@ public final class LeastSquares {
         }
     }
 
-    private static double[] columnNorms(Design design) {
-        double[] norms = new double[design.width()];
+    /** Euclidean column lengths; a column of zeros is refused by name. */
+    private static double[] columnNorms(Design design, double[][] columns) {
+        double[] norms = new double[columns.length];
         for (int j = 0; j < norms.length; j++) {
-            norms[j] = new ArrayRealVector(design.columns().get(j), false).getNorm();
+            norms[j] = norm(columns[j]);
             if (norms[j] == 0) {
                 throw new RankDeficientDesignException("Regressor '" + design.names().get(j)
                         + "' is zero in every row, so its coefficient cannot be estimated; drop it from the model.");
@@ -112,128 +122,138 @@ public final class LeastSquares {
         return norms;
     }
 
-    private static RealMatrix scaledMatrix(Design design, double[] scale) {
-        double[][] rows = design.toRows();
-        for (double[] row : rows) {
-            for (int j = 0; j < scale.length; j++) {
-                row[j] /= scale[j];
-            }
+    /** ||x||, with the squares taken after an exact power-of-two scaling so that none overflows. */
+    private static double norm(double[] x) {
+        double largest = 0;
+        for (double v : x) {
+            largest = Math.max(largest, Math.abs(v));
         }
-        return new Array2DRowRealMatrix(rows, false);
+        if (largest == 0) {
+            return 0;
+        }
+        int exponent = Math.getExponent(largest);
+        double sum = 0;
+        for (double v : x) {
+            double scaled = Math.scalb(v, -exponent);
+            sum += scaled * scaled;
+        }
+        return Math.scalb(Math.sqrt(sum), exponent);
     }
 
-    /** pivot[i] = the original column placed at position i by the pivoting. */
-    private static int[] pivotOrder(RealMatrix permutation, int k) {
-        int[] pivot = new int[k];
+    /**
+     * Divides column j in place by s_j = 2^floor(log2 ||x_j||), leaving lengths in [1, 2), and
+     * returns the s_j; the norms are divided likewise. Exact unless a value falls below the
+     * normal range, 2^-1022 times its column's length, where it may lose low-order bits.
+     */
+    private static double[] scaleByPowersOfTwo(double[][] columns, double[] norms) {
+        double[] scale = new double[columns.length];
+        for (int j = 0; j < columns.length; j++) {
+            int exponent = Math.getExponent(norms[j]);
+            scale[j] = Math.scalb(1.0, exponent);
+            norms[j] = Math.scalb(norms[j], -exponent);
+            for (int i = 0; i < columns[j].length; i++) {
+                columns[j][i] = Math.scalb(columns[j][i], -exponent);
+            }
+        }
+        return scale;
+    }
+
+    /** R of the columns scaled to unit length: column s of R divided by the length of its column. */
+    private static double[][] unitScaledR(PivotedQr qr, double[] norms) {
+        int k = qr.width();
+        double[][] unitR = new double[k][k];
         for (int i = 0; i < k; i++) {
-            for (int j = 0; j < k; j++) {
-                if (permutation.getEntry(j, i) != 0) {
-                    pivot[i] = j;
-                }
+            for (int j = i; j < k; j++) {
+                unitR[i][j] = qr.r(i, j) / norms[qr.pivot(j)];
             }
         }
-        return pivot;
+        return unitR;
     }
 
-    private static void checkRank(Design design, RealMatrix r, int[] pivot) {
-        double largest = Math.abs(r.getEntry(0, 0));
-        for (int i = 1; i < pivot.length; i++) {
-            if (Math.abs(r.getEntry(i, i)) <= RANK_TOLERANCE * largest) {
-                throw new RankDeficientDesignException("Regressor '" + design.names().get(pivot[i])
-                        + "' is (numerically) a linear combination of the others, so the coefficients are not"
-                        + " unique; drop it or one of the regressors it depends on.");
+    /**
+     * Refuses a rank-deficient design, naming the first regressor (in the design's order) that is
+     * numerically a linear combination of the ones before it: the pivoted factorisation decides
+     * whether the design is deficient, and the leading blocks of columns, factorised in turn, say
+     * where. That second search runs only on the way to the exception.
+     */
+    private static void checkRank(Design design, double[][] unitR, double[][] columns, double[] norms) {
+        if (!isRankDeficient(unitR)) {
+            return;
+        }
+        int dependent = columns.length - 1;
+        for (int j = 1; j < columns.length - 1; j++) {
+            PivotedQr leading = PivotedQr.factor(Arrays.copyOf(columns, j + 1));
+            if (isRankDeficient(unitScaledR(leading, norms))) {
+                dependent = j;
+                break;
             }
         }
+        throw new RankDeficientDesignException("Regressor '" + design.names().get(dependent)
+                + "' is (numerically) a linear combination of the regressors before it, so the coefficients"
+                + " are not unique; drop it or one of the regressors it depends on.");
     }
 
-    private static double[] refinedSolution(DecompositionSolver solver, RealMatrix scaled, double[] y) {
-        double[] b = solver.solve(new ArrayRealVector(y, false)).toArray();
-        double[] residual = exactResidual(scaled, y, b);
-        double[] correction = solver.solve(new ArrayRealVector(residual, false)).toArray();
-        for (int j = 0; j < b.length; j++) {
-            b[j] += correction[j];
-        }
-        return b;
-    }
-
-    /** y - X b with each row's dot product accumulated by fused multiply-adds. */
-    private static double[] exactResidual(RealMatrix x, double[] y, double[] b) {
-        double[] residual = new double[y.length];
-        for (int i = 0; i < y.length; i++) {
-            double sum = -y[i];
-            for (int j = 0; j < b.length; j++) {
-                sum = Math.fma(x.getEntry(i, j), b[j], sum);
-            }
-            residual[i] = -sum;
-        }
-        return residual;
-    }
-
-    /** (X'X)^-1 = D^-1 P R^-1 R^-T P' D^-1 for the scaled, pivoted factorisation X D^-1 P = Q R. */
-    private static double[][] xtxInverse(RealMatrix r, int[] pivot, double[] scale) {
-        int k = pivot.length;
-        double[][] rInverse = upperTriangularInverse(r);
-        double[][] result = new double[k][k];
-        for (int a = 0; a < k; a++) {
-            for (int c = a; c < k; c++) {
-                double sum = 0;
-                for (int m = Math.max(a, c); m < k; m++) {
-                    sum += rInverse[a][m] * rInverse[c][m];
-                }
-                int i = pivot[a];
-                int j = pivot[c];
-                result[i][j] = sum / (scale[i] * scale[j]);
-                result[j][i] = result[i][j];
+    private static boolean isRankDeficient(double[][] unitR) {
+        double largest = Math.abs(unitR[0][0]);
+        for (int i = 1; i < unitR.length; i++) {
+            if (Math.abs(unitR[i][i]) <= RANK_TOLERANCE * largest) {
+                return true;
             }
         }
-        return result;
+        return false;
     }
 
-    private static double[][] upperTriangularInverse(RealMatrix r) {
-        int k = r.getRowDimension();
-        double[][] inverse = new double[k][k];
-        for (int j = 0; j < k; j++) {
-            inverse[j][j] = 1 / r.getEntry(j, j);
-            for (int i = j - 1; i >= 0; i--) {
-                double sum = 0;
-                for (int m = i + 1; m <= j; m++) {
-                    sum += r.getEntry(i, m) * inverse[m][j];
-                }
-                inverse[i][j] = -sum / r.getEntry(i, i);
-            }
-        }
-        return inverse;
-    }
-
-    private static OlsFit summarize(Design design, double[] y, double[] b, double[][] xtxInverse,
-                                    double conditionNumber) {
+    /**
+     * The fit's statistics from the coefficients; scaledB are the coefficients of the scaled
+     * columns, which give exactly the products x_ij b_j of the original ones.
+     *
+     * <p>R^2 = 1 - RSS/TSS, except that when the explained sum of squares ESS = sum (yhat_i - c)^2
+     * (c the mean of y with an intercept, else 0) is below RSS, R^2 = ESS/TSS and F uses ESS: for
+     * a least-squares fit TSS = ESS + RSS, and 1 - RSS/TSS or TSS - RSS would then cancel
+     * (NIST's Wampler5, R^2 = 0.0022, loses one digit to it).
+     */
+    private static OlsFit summarize(Design design, double[][] columns, double[] y, double[] scaledB, double[] b,
+                                    double[][] xtxInverse, double conditionNumber) {
         int n = y.length;
         int k = b.length;
         int df = n - k;
-        double[] fitted = new double[n];
-        double[] residuals = new double[n];
-        for (int i = 0; i < n; i++) {
-            double sum = 0;
-            for (int j = 0; j < k; j++) {
-                sum = Math.fma(design.get(i, j), b[j], sum);
-            }
-            fitted[i] = sum;
-            residuals[i] = y[i] - sum;
-        }
+        double[][] fittedAndResiduals = fittedAndResiduals(columns, y, scaledB);
+        double[] fitted = fittedAndResiduals[0];
+        double[] residuals = fittedAndResiduals[1];
+        double centre = design.hasIntercept() ? mean(y) : 0;
         double rss = sumOfSquares(residuals, 0);
-        double tss = design.hasIntercept() ? sumOfSquares(y, mean(y)) : sumOfSquares(y, 0);
+        double tss = sumOfSquares(y, centre);
+        double ess = sumOfSquares(fitted, centre);
+        boolean fewExplained = ess < rss;
         double variance = rss / df;
         List<Coefficient> coefficients = coefficients(design, b, xtxInverse, variance, df);
         int modelDf = k - (design.hasIntercept() ? 1 : 0);
-        double fStatistic = modelDf == 0 ? Double.NaN : ((tss - rss) / modelDf) / variance;
+        double fStatistic = modelDf == 0 ? Double.NaN : ((fewExplained ? ess : tss - rss) / modelDf) / variance;
         double fPValue = modelDf == 0 ? Double.NaN : upperTailF(fStatistic, modelDf, df);
-        double rSquared = 1 - rss / tss;
-        double adjusted = 1 - (1 - rSquared) * (n - (design.hasIntercept() ? 1 : 0)) / df;
+        double rSquared = fewExplained ? ess / tss : 1 - rss / tss;
+        double adjusted = 1 - (rss / tss) * (n - (design.hasIntercept() ? 1 : 0)) / df;
         double logLikelihood = -0.5 * n * (Math.log(2 * Math.PI) + Math.log(rss / n) + 1);
         double aic = -2 * logLikelihood + 2.0 * (k + 1);
         double bic = -2 * logLikelihood + Math.log(n) * (k + 1);
         return new OlsFit(design, y, coefficients, fitted, residuals, rss, tss, rSquared, adjusted, fStatistic,
                 fPValue, Math.sqrt(variance), df, logLikelihood, aic, bic, xtxInverse, conditionNumber);
+    }
+
+    /** {X b, y - X b}, each entry accumulated in double-double arithmetic and rounded once. */
+    private static double[][] fittedAndResiduals(double[][] columns, double[] y, double[] scaledB) {
+        double[] fitted = new double[y.length];
+        double[] residuals = new double[y.length];
+        for (int i = 0; i < y.length; i++) {
+            CompensatedDot fit = new CompensatedDot();
+            CompensatedDot residual = new CompensatedDot().add(y[i]);
+            for (int j = 0; j < scaledB.length; j++) {
+                fit.addProduct(columns[j][i], scaledB[j]);
+                residual.addProduct(-columns[j][i], scaledB[j]);
+            }
+            fitted[i] = fit.value();
+            residuals[i] = residual.value();
+        }
+        return new double[][] {fitted, residuals};
     }
 
     private static List<Coefficient> coefficients(Design design, double[] b, double[][] xtxInverse,
@@ -260,30 +280,25 @@ public final class LeastSquares {
         return Beta.regularizedBeta(d2 / (d2 + d1 * f), d2 / 2.0, d1 / 2.0);
     }
 
+    /** The mean, from a sum in double-double arithmetic rounded once. */
     static double mean(double[] values) {
-        double sum = 0;
+        CompensatedDot sum = new CompensatedDot();
         for (double v : values) {
-            sum += v;
+            sum.add(v);
         }
-        double mean = sum / values.length;
-        double correction = 0;
-        for (double v : values) {
-            correction += v - mean;
-        }
-        return mean + correction / values.length;
+        return sum.value() / values.length;
     }
 
-    /** Sum of (v - centre)^2, two-pass so that a large mean does not swamp the squares. */
+    /**
+     * Sum of (v - centre)^2 in double-double arithmetic: each difference is rounded once (relative
+     * error u), the squares and their sum are exact to twice the working precision.
+     */
     static double sumOfSquares(double[] values, double centre) {
-        double sum = 0;
-        double compensation = 0;
+        CompensatedDot sum = new CompensatedDot();
         for (double v : values) {
             double d = v - centre;
-            double term = d * d - compensation;
-            double next = sum + term;
-            compensation = (next - sum) - term;
-            sum = next;
+            sum.addProduct(d, d);
         }
-        return sum;
+        return sum.value();
     }
 }
