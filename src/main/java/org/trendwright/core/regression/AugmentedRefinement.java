@@ -44,10 +44,19 @@ final class AugmentedRefinement {
     }
 
     /**
-     * The least-squares coefficients of y on the columns x (original column order), refined as
+     * The refined solution of the augmented system.
+     *
+     * @param coefficients b, in the original column order
+     * @param residuals    r = y - X b for the exact least-squares b, correct to about u ||r||
+     */
+    record Solution(double[] coefficients, double[] residuals) {
+    }
+
+    /**
+     * The least-squares solution for y on the columns x (original column order), refined as
      * described above; qr must be the factorisation of exactly these columns.
      */
-    static double[] coefficients(double[][] x, PivotedQr qr, double[] y) {
+    static Solution solve(double[][] x, PivotedQr qr, double[] y) {
         double[] b = new double[x.length];
         double[] r = new double[y.length];
         double previous = Double.POSITIVE_INFINITY;
@@ -69,7 +78,7 @@ final class AugmentedRefinement {
             }
             previous = size;
         }
-        return b;
+        return new Solution(b, r);
     }
 
     /** f = y - r - X b, each entry in double-double arithmetic, then rounded. */

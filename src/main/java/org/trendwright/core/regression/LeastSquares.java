@@ -73,7 +73,8 @@ public final class LeastSquares {
         PivotedQr qr = PivotedQr.factor(columns);
         double[][] unitR = unitScaledR(qr, norms);
         checkRank(design, unitR, columns, norms);
-        double[] scaledB = AugmentedRefinement.coefficients(columns, qr, y);
+        AugmentedRefinement.Solution solution = AugmentedRefinement.solve(columns, qr, y);
+        double[] scaledB = solution.coefficients();
         double[][] xtxInverse = GramInverse.refined(columns, qr);
         // With X = Xs S (S the diagonal of scales): b = S^-1 bs and (X'X)^-1 = S^-1 (Xs'Xs)^-1 S^-1.
         double[] b = new double[k];
@@ -85,7 +86,7 @@ public final class LeastSquares {
         }
         double conditionNumber = new SingularValueDecomposition(new Array2DRowRealMatrix(unitR, false))
                 .getConditionNumber();
-        return summarize(design, columns, y, scaledB, b, xtxInverse, conditionNumber);
+        return summarize(design, y, fitted(columns, scaledB), solution.residuals(), b, xtxInverse, conditionNumber);
     }
 
     private static void checkInput(Design design, double[] y) {
@@ -204,22 +205,20 @@ public final class LeastSquares {
     }
 
     /**
-     * The fit's statistics from the coefficients; scaledB are the coefficients of the scaled
-     * columns, which give exactly the products x_ij b_j of the original ones.
+     * The fit's statistics. The residuals are those of the refined solution: the least-squares
+     * residuals to about u ||r||, orthogonal to every column to working precision; y - X b from the
+     * rounded coefficients would add X (b - b_exact), which an ill-conditioned X inflates.
      *
      * <p>R^2 = 1 - RSS/TSS, except that when the explained sum of squares ESS = sum (yhat_i - c)^2
      * (c the mean of y with an intercept, else 0) is below RSS, R^2 = ESS/TSS and F uses ESS: for
      * a least-squares fit TSS = ESS + RSS, and 1 - RSS/TSS or TSS - RSS would then cancel
      * (NIST's Wampler5, R^2 = 0.0022, loses one digit to it).
      */
-    private static OlsFit summarize(Design design, double[][] columns, double[] y, double[] scaledB, double[] b,
+    private static OlsFit summarize(Design design, double[] y, double[] fitted, double[] residuals, double[] b,
                                     double[][] xtxInverse, double conditionNumber) {
         int n = y.length;
         int k = b.length;
         int df = n - k;
-        double[][] fittedAndResiduals = fittedAndResiduals(columns, y, scaledB);
-        double[] fitted = fittedAndResiduals[0];
-        double[] residuals = fittedAndResiduals[1];
         double centre = design.hasIntercept() ? mean(y) : 0;
         double rss = sumOfSquares(residuals, 0);
         double tss = sumOfSquares(y, centre);
@@ -239,21 +238,20 @@ public final class LeastSquares {
                 fPValue, Math.sqrt(variance), df, logLikelihood, aic, bic, xtxInverse, conditionNumber);
     }
 
-    /** {X b, y - X b}, each entry accumulated in double-double arithmetic and rounded once. */
-    private static double[][] fittedAndResiduals(double[][] columns, double[] y, double[] scaledB) {
-        double[] fitted = new double[y.length];
-        double[] residuals = new double[y.length];
-        for (int i = 0; i < y.length; i++) {
-            CompensatedDot fit = new CompensatedDot();
-            CompensatedDot residual = new CompensatedDot().add(y[i]);
+    /**
+     * X b, each entry accumulated in double-double arithmetic and rounded once; the scaled columns
+     * with their coefficients give exactly the products x_ij b_j of the original ones.
+     */
+    private static double[] fitted(double[][] columns, double[] scaledB) {
+        double[] fitted = new double[columns[0].length];
+        for (int i = 0; i < fitted.length; i++) {
+            CompensatedDot sum = new CompensatedDot();
             for (int j = 0; j < scaledB.length; j++) {
-                fit.addProduct(columns[j][i], scaledB[j]);
-                residual.addProduct(-columns[j][i], scaledB[j]);
+                sum.addProduct(columns[j][i], scaledB[j]);
             }
-            fitted[i] = fit.value();
-            residuals[i] = residual.value();
+            fitted[i] = sum.value();
         }
-        return new double[][] {fitted, residuals};
+        return fitted;
     }
 
     private static List<Coefficient> coefficients(Design design, double[] b, double[][] xtxInverse,
