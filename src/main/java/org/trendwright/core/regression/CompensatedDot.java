@@ -11,7 +11,7 @@ package org.trendwright.core.regression;
  * Computer Programming, vol. 2, 1969). The errors e and q are summed on the side and added at the
  * end. The result is as accurate as if it had been computed in twice the working precision and
  * then rounded: |result - exact| <= u |exact| + gamma_n^2 sum |terms|, with u = 2^-53 and
- * gamma_n = n u / (1 - n u) (Ogita, Rump & Oishi 2005, Proposition 5.5). That is what makes
+ * gamma_n = n u / (1 - n u), the error bound of Dot2 in Section 5 of the paper. That is what makes
  * residuals such as y - r - X b, whose terms cancel to many digits, come out right.
  *
  * <p>Not thread-safe: one instance per sum.
