@@ -1,7 +1,6 @@
 package org.trendwright.core.regression;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
@@ -9,7 +8,6 @@ import org.apache.commons.math3.linear.SingularValueDecomposition;
 import org.apache.commons.math3.special.Beta;
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.InvalidSpecificationException;
-import org.trendwright.core.RankDeficientDesignException;
 
 /**
  * Ordinary least squares by Householder QR with column pivoting, never by the normal equations.
@@ -23,19 +21,24 @@ import org.trendwright.core.RankDeficientDesignException;
  * <ol>
  *   <li>each column is scaled by the power of two nearest below its Euclidean length before the
  *       decomposition; scaling by a power of two is exact, so the scaled problem has the very
- *       same solution, undone exactly afterwards;</li>
- *   <li>columns are pivoted as if scaled to unit length (Businger &amp; Golub 1965), so that on
- *       the unit-scaled factor |R_11| &gt;= |R_22| &gt;= ...; the design counts as rank deficient
- *       when some |R_jj| falls to {@link #RANK_TOLERANCE} times |R_11| or below;</li>
+ *       same solution, undone exactly afterwards ({@link ScaledDesign});</li>
+ *   <li>columns are pivoted as if scaled to unit length (Businger &amp; Golub 1965;
+ *       {@link PivotedQr}), so that on the unit-scaled factor |R_11| &gt;= |R_22| &gt;= ...; the
+ *       design counts as rank deficient when some |R_jj| falls to {@link #RANK_TOLERANCE} times
+ *       |R_11| or below, and the error names the first regressor that is a linear combination of
+ *       the ones before it;</li>
  *   <li>the solution is refined through the augmented system with residuals accumulated in
  *       double-double arithmetic (Björck 1967, BIT 7; see {@link AugmentedRefinement}), which
  *       also removes the cond(X)^2 ||r|| error term of large-residual problems;</li>
+ *   <li>(X'X)^-1 = P R^-1 R^-T P' comes from the triangular factor and is refined against X'X
+ *       accumulated in double-double arithmetic ({@link GramInverse});</li>
  *   <li>fitted values, residuals and the sums of squares are accumulated in double-double
  *       arithmetic (Ogita, Rump &amp; Oishi 2005, SIAM J. Sci. Comput. 26).</li>
  * </ol>
  *
- * <p>(X'X)^-1 = P R^-1 R^-T P' comes from the triangular factor, again without forming X'X.
- * src/docs/accuracy.md records the digits reached on the NIST StRD linear datasets.
+ * <p>On every NIST StRD linear dataset the coefficients are the correctly rounded exact
+ * least-squares solution of the data as stored in double precision, and the other certified
+ * quantities as close to it; src/docs/accuracy.md has the figures.
  *
  * <p>Stateless and thread-safe.
  */
@@ -43,8 +46,8 @@ public final class LeastSquares {
 
     /**
      * Relative rank tolerance on the pivoted R of the columns scaled to unit length: a diagonal
-     * element at most this times the largest marks the column as a linear combination of the
-     * others. 1e-13 sits about 500 ulps above double rounding, so the NIST StRD Filip polynomial
+     * element at most this times the first (the largest) marks the column as a linear combination
+     * of the others. 1e-13 sits about 500 ulps above double rounding, so the NIST StRD Filip polynomial
      * (degree 10) still counts as full rank while exact collinearity is caught.
      */
     public static final double RANK_TOLERANCE = 1e-13;
@@ -70,32 +73,17 @@ public final class LeastSquares {
         if (n <= k) {
             throw InsufficientDataException.forModel("A regression on " + k + " regressors", k + 1, n);
         }
-        double[][] columns = design.columns().toArray(new double[0][]);
-        double[] norms = columnNorms(design, columns);
-        double[] scale = scaleByPowersOfTwo(columns, norms);
-        PivotedQr qr = PivotedQr.factor(columns);
-        double[][] unitR = unitScaledR(qr, norms);
-        checkRank(design, unitR, columns, norms);
-        AugmentedRefinement.Solution solution = AugmentedRefinement.solve(columns, qr, y);
+        ScaledDesign scaled = ScaledDesign.of(design);
+        PivotedQr qr = PivotedQr.factor(scaled.columns());
+        double[][] unitR = scaled.unitLengthR(qr);
+        scaled.checkRank(unitR);
+        AugmentedRefinement.Solution solution = AugmentedRefinement.solve(scaled.columns(), qr, y);
         double[] scaledB = solution.coefficients();
-        double[][] xtxInverse = GramInverse.refined(columns, qr);
-        // With X = Xs S (S the diagonal of scales): b = S^-1 bs and (X'X)^-1 = S^-1 (Xs'Xs)^-1 S^-1.
-        double[] b = new double[k];
-        for (int i = 0; i < k; i++) {
-            b[i] = scaledB[i] / scale[i];
-            for (int j = 0; j < k; j++) {
-                xtxInverse[i][j] = xtxInverse[i][j] / scale[i] / scale[j];
-            }
-        }
-        double conditionNumber = new SingularValueDecomposition(new Array2DRowRealMatrix(unitR, false))
-                .getConditionNumber();
-        double fitMagnitude = 0;
-        for (int j = 0; j < k; j++) {
-            fitMagnitude += norms[j] * Math.abs(scaledB[j]);
-        }
-        double[][] fittedAndResiduals = fittedAndResiduals(columns, y, scaledB);
+        double[][] fittedAndResiduals = fittedAndResiduals(scaled.columns(), y, scaledB);
         double[] residuals = isZero(fittedAndResiduals[1]) ? fittedAndResiduals[1] : solution.residuals();
-        return summarize(design, y, fittedAndResiduals[0], fitMagnitude, residuals, b, xtxInverse, conditionNumber);
+        double[][] xtxInverse = scaled.unscaledInverse(GramInverse.refined(scaled.columns(), qr));
+        return summarize(design, y, fittedAndResiduals[0], scaled.fitMagnitude(scaledB), residuals,
+                scaled.unscaled(scaledB), xtxInverse, conditionNumber(unitR));
     }
 
     private static void checkInput(Design design, double[] y) {
@@ -119,98 +107,9 @@ public final class LeastSquares {
         }
     }
 
-    /** Euclidean column lengths; a column of zeros is refused by name. */
-    private static double[] columnNorms(Design design, double[][] columns) {
-        double[] norms = new double[columns.length];
-        for (int j = 0; j < norms.length; j++) {
-            norms[j] = norm(columns[j]);
-            if (norms[j] == 0) {
-                throw new RankDeficientDesignException("Regressor '" + design.names().get(j)
-                        + "' is zero in every row, so its coefficient cannot be estimated; drop it from the model.");
-            }
-        }
-        return norms;
-    }
-
-    /** ||x||, with the squares taken after an exact power-of-two scaling so that none overflows. */
-    private static double norm(double[] x) {
-        double largest = 0;
-        for (double v : x) {
-            largest = Math.max(largest, Math.abs(v));
-        }
-        if (largest == 0) {
-            return 0;
-        }
-        int exponent = Math.getExponent(largest);
-        double sum = 0;
-        for (double v : x) {
-            double scaled = Math.scalb(v, -exponent);
-            sum += scaled * scaled;
-        }
-        return Math.scalb(Math.sqrt(sum), exponent);
-    }
-
-    /**
-     * Divides column j in place by s_j = 2^floor(log2 ||x_j||), leaving lengths in [1, 2), and
-     * returns the s_j; the norms are divided likewise. Exact unless a value falls below the
-     * normal range, 2^-1022 times its column's length, where it may lose low-order bits.
-     */
-    private static double[] scaleByPowersOfTwo(double[][] columns, double[] norms) {
-        double[] scale = new double[columns.length];
-        for (int j = 0; j < columns.length; j++) {
-            int exponent = Math.getExponent(norms[j]);
-            scale[j] = Math.scalb(1.0, exponent);
-            norms[j] = Math.scalb(norms[j], -exponent);
-            for (int i = 0; i < columns[j].length; i++) {
-                columns[j][i] = Math.scalb(columns[j][i], -exponent);
-            }
-        }
-        return scale;
-    }
-
-    /** R of the columns scaled to unit length: column s of R divided by the length of its column. */
-    private static double[][] unitScaledR(PivotedQr qr, double[] norms) {
-        int k = qr.width();
-        double[][] unitR = new double[k][k];
-        for (int i = 0; i < k; i++) {
-            for (int j = i; j < k; j++) {
-                unitR[i][j] = qr.r(i, j) / norms[qr.pivot(j)];
-            }
-        }
-        return unitR;
-    }
-
-    /**
-     * Refuses a rank-deficient design, naming the first regressor (in the design's order) that is
-     * numerically a linear combination of the ones before it: the pivoted factorisation decides
-     * whether the design is deficient, and the leading blocks of columns, factorised in turn, say
-     * where. That second search runs only on the way to the exception.
-     */
-    private static void checkRank(Design design, double[][] unitR, double[][] columns, double[] norms) {
-        if (!isRankDeficient(unitR)) {
-            return;
-        }
-        int dependent = columns.length - 1;
-        for (int j = 1; j < columns.length - 1; j++) {
-            PivotedQr leading = PivotedQr.factor(Arrays.copyOf(columns, j + 1));
-            if (isRankDeficient(unitScaledR(leading, norms))) {
-                dependent = j;
-                break;
-            }
-        }
-        throw new RankDeficientDesignException("Regressor '" + design.names().get(dependent)
-                + "' is (numerically) a linear combination of the regressors before it, so the coefficients"
-                + " are not unique; drop it or one of the regressors it depends on.");
-    }
-
-    private static boolean isRankDeficient(double[][] unitR) {
-        double largest = Math.abs(unitR[0][0]);
-        for (int i = 1; i < unitR.length; i++) {
-            if (Math.abs(unitR[i][i]) <= RANK_TOLERANCE * largest) {
-                return true;
-            }
-        }
-        return false;
+    /** The 2-norm condition number of the unit-length design, from the singular values of its R. */
+    private static double conditionNumber(double[][] unitR) {
+        return new SingularValueDecomposition(new Array2DRowRealMatrix(unitR, false)).getConditionNumber();
     }
 
     /**
