@@ -21,7 +21,7 @@ import org.trendwright.core.regression.RandomRegression.Problem;
 /**
  * Invariants of least squares that hold for every full-rank design (common practice; see e.g.
  * Björck 1996, "Numerical Methods for Least Squares Problems", SIAM, ch. 1), checked on seeded
- * random problems ({@link RandomRegression}: condition numbers up to about 1e5, residuals from a
+ * random problems ({@link RandomRegression}: condition numbers up to about 2e5, residuals from a
  * thousandth to a thousand times the signal). QuickTheories draws the seeds and sizes from a fixed
  * seed, so every run checks the same examples.
  *
