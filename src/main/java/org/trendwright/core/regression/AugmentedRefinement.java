@@ -62,8 +62,9 @@ final class AugmentedRefinement {
         double previous = Double.POSITIVE_INFINITY;
         for (int step = 0; step <= MAX_REFINEMENTS; step++) {
             double[] db = new double[b.length];
-            double[] dr = augmentedResidualF(x, y, r, b);
-            correct(qr, augmentedResidualG(x, r), dr, db);
+            // From r = 0, b = 0 the augmented residuals are f = y and g = 0 exactly.
+            double[] dr = step == 0 ? y.clone() : augmentedResidualF(x, y, r, b);
+            correct(qr, step == 0 ? new double[b.length] : augmentedResidualG(x, r), dr, db);
             double size = norm(db);
             if (size >= previous) {
                 break;

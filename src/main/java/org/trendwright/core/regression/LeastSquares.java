@@ -79,10 +79,10 @@ public final class LeastSquares {
         scaled.checkRank(unitR);
         AugmentedRefinement.Solution solution = AugmentedRefinement.solve(scaled.columns(), qr, y);
         double[] scaledB = solution.coefficients();
-        double[][] fittedAndResiduals = fittedAndResiduals(scaled.columns(), y, scaledB);
-        double[] residuals = isZero(fittedAndResiduals[1]) ? fittedAndResiduals[1] : solution.residuals();
+        double[] residuals = isExactFit(scaled.columns(), y, scaledB, solution.residuals())
+                ? new double[n] : solution.residuals();
         double[][] xtxInverse = scaled.unscaledInverse(GramInverse.refined(scaled.columns(), qr));
-        return summarize(design, y, fittedAndResiduals[0], scaled.fitMagnitude(scaledB), residuals,
+        return summarize(design, y, fitted(scaled.columns(), scaledB), scaled.fitMagnitude(scaledB), residuals,
                 scaled.unscaled(scaledB), xtxInverse, conditionNumber(unitR));
     }
 
@@ -164,29 +164,36 @@ public final class LeastSquares {
     }
 
     /**
-     * {X b, y - X b}, each entry accumulated in double-double arithmetic and rounded once; the
-     * scaled columns with their coefficients give exactly the products x_ij b_j of the original
-     * ones.
+     * X b, each entry accumulated in double-double arithmetic and rounded once; the scaled columns
+     * with their coefficients give exactly the products x_ij b_j of the original ones.
      */
-    private static double[][] fittedAndResiduals(double[][] columns, double[] y, double[] scaledB) {
-        double[] fitted = new double[y.length];
-        double[] residuals = new double[y.length];
-        for (int i = 0; i < y.length; i++) {
-            CompensatedDot fit = new CompensatedDot();
-            CompensatedDot residual = new CompensatedDot().add(y[i]);
+    private static double[] fitted(double[][] columns, double[] scaledB) {
+        double[] fitted = new double[columns[0].length];
+        for (int i = 0; i < fitted.length; i++) {
+            CompensatedDot sum = new CompensatedDot();
             for (int j = 0; j < scaledB.length; j++) {
-                fit.addProduct(columns[j][i], scaledB[j]);
-                residual.addProduct(-columns[j][i], scaledB[j]);
+                sum.addProduct(columns[j][i], scaledB[j]);
             }
-            fitted[i] = fit.value();
-            residuals[i] = residual.value();
+            fitted[i] = sum.value();
         }
-        return new double[][] {fitted, residuals};
+        return fitted;
     }
 
-    private static boolean isZero(double[] values) {
-        for (double v : values) {
-            if (v != 0) {
+    /**
+     * Whether y - X b is exactly 0 in double-double arithmetic. Only a refined residual at or below
+     * the rounding level of y, ||r|| <= u ||y||, can belong to an exact fit, so the n k check runs
+     * only then.
+     */
+    private static boolean isExactFit(double[][] columns, double[] y, double[] scaledB, double[] refinedResidual) {
+        if (sumOfSquares(refinedResidual, 0) > 0x1p-106 * sumOfSquares(y, 0)) {
+            return false;
+        }
+        for (int i = 0; i < y.length; i++) {
+            CompensatedDot residual = new CompensatedDot().add(y[i]);
+            for (int j = 0; j < scaledB.length; j++) {
+                residual.addProduct(-columns[j][i], scaledB[j]);
+            }
+            if (residual.value() != 0) {
                 return false;
             }
         }
