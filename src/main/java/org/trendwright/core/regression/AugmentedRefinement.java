@@ -44,10 +44,12 @@ final class AugmentedRefinement {
     }
 
     /**
-     * The refined solution of the augmented system.
+     * The refined solution of the augmented system (an internal carrier: the arrays are handed
+     * over, not copied).
      *
      * @param coefficients b, in the original column order
-     * @param residuals    r = y - X b for the exact least-squares b, correct to about u ||r||
+     * @param residuals    r = y - X b for the exact least-squares b, correct to about u ||r|| plus
+     *                     terms of order u^2 ||y||
      */
     record Solution(double[] coefficients, double[] residuals) {
     }

@@ -12,7 +12,9 @@ package org.trendwright.core.regression;
  * equations of Björck (1987), "Stability analysis of the method of seminormal equations for
  * linear least squares problems", Linear Algebra Appl. 88/89, 31-48: although G has condition
  * number cond(X)^2, the correction uses the well-conditioned factor R, so each step shrinks the
- * error by a factor of about cond(X) u, and the limit is set by the double-double residual E.
+ * error by a factor of about cond(X) u. The limit is set by the double-double residual E, whose
+ * rounding leaves a relative error of about cond(X)^2 u^2: below u for condition numbers under
+ * 1/sqrt(u), about 1e8, and 3e-13 on NIST's Filip (condition number 5e9).
  *
  * <p>Steps stop when a correction is at most u times the largest entry of Z, when it is no
  * smaller than the one before (that one is not applied), or after {@link #MAX_REFINEMENTS}.
