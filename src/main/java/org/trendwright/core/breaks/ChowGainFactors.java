@@ -31,7 +31,7 @@ import org.trendwright.core.regression.LeastSquares;
  *
  * <p>Q comes from modified Gram-Schmidt applied twice ("twice is enough": Giraud, Langou &amp;
  * Rozloznik 2005, "The loss of orthogonality in the Gram-Schmidt orthogonalization process",
- * Comput. Math. Appl. 50), orthonormal to rounding for any numerically full-rank X.
+ * Comput. Math. Appl. 50; from memory), orthonormal to rounding for any numerically full-rank X.
  *
  * <p>Immutable after construction and thread-safe: {@link #supF} works on its own arrays.
  */
@@ -166,7 +166,10 @@ final class ChowGainFactors {
         return rowMajor;
     }
 
-    /** Divides v by its length (computed after scaling by the largest |v_i|, so it cannot overflow); returns the length. */
+    /**
+     * Divides v by its length and returns the length, computed after scaling by the largest |v_i|
+     * so that the squares cannot overflow; 0 for a zero vector, which is left as it is.
+     */
     private static double scaleToUnitLength(double[] v) {
         double largest = 0;
         for (double value : v) {

@@ -34,7 +34,10 @@ final class NormalStream {
         return z ^ (z >>> 31);
     }
 
-    /** Fills {@code out} with independent N(0, 1) draws (one draw of the last pair is discarded when the length is odd). */
+    /**
+     * Fills {@code out} with independent N(0, 1) draws; when its length is odd, the second draw of
+     * the last pair is discarded.
+     */
     void fill(double[] out) {
         for (int i = 0; i < out.length; i += 2) {
             double u;

@@ -49,7 +49,7 @@ import org.trendwright.core.regression.Design;
  */
 public record SupFNullDistribution(long seed, double[] draws) {
 
-    /** The number of replications for a design of ordinary size: 1,999, so 0.05 (R + 1) and 0.01 (R + 1) are integers. */
+    /** Replications for a design of ordinary size: 1,999, so 0.05 (R + 1) and 0.01 (R + 1) are integers. */
     public static final int DEFAULT_REPLICATIONS = 1999;
     /** The fewest replications {@link #defaultReplications} chooses, for the largest designs. */
     public static final int FEWEST_DEFAULT_REPLICATIONS = 499;
@@ -207,13 +207,13 @@ public record SupFNullDistribution(long seed, double[] draws) {
     /**
      * R for a design of n rows and k columns: {@link #DEFAULT_REPLICATIONS} (1,999) while
      * R w &lt;= {@link #WORK_BUDGET}, else 999 if that fits, else {@link #FEWEST_DEFAULT_REPLICATIONS}
-     * (499). Here w = n (k + 20) + c k (k + 1) / 2 is the work of one replication in multiply-adds
-     * (c candidate rows, k (k + 1) / 2 each; 3 n k for the projection and partial sums; a row's
-     * normal draw and loop overhead counted as 20, as measured: about 26 ns per row against
-     * 1.3 ns per multiply-add). Within the budget a request takes at most a few tenths of a second
-     * on one core (src/docs/benchmarks.md); 1,999 replications cover every design up to n = 1,000
-     * with a linear trend and 11 monthly dummies (k = 13). For R = 1,999, 999 and 499 the 1%, 5%
-     * and 10% tests keep their exact size, since alpha (R + 1) is an integer. Below 499 the
+     * (499). Here w = n (k + 20) + c k (k + 1) / 2 is the work of one replication in units of a
+     * multiply-add: k (k + 1) / 2 for each of the c candidate rows, and k + 20 for each row's normal
+     * draw, projection and partial sums (a round fit to the measured 25 ns per row at k = 2 against
+     * 0.5 to 1.3 ns per multiply-add). Within the budget a request takes at most a few tenths of a
+     * second on one core (src/docs/benchmarks.md); 1,999 replications cover every design up to
+     * n = 1,000 with a linear trend and 11 monthly dummies (k = 13). For R = 1,999, 999 and 499
+     * the 1%, 5% and 10% tests keep their exact size, since alpha (R + 1) is an integer. Below 499 the
      * p-value's standard error near 0.05 would exceed 0.01, so R is not reduced further and the
      * cost then grows linearly in n. There is no fallback to the asymptotic table: for trend
      * designs it is wrong at every n we measured, and more so as n grows (see {@link SupFTest}).

@@ -84,8 +84,9 @@ class SupFNullDistributionTest {
             double[] row = table.stream().filter(r -> r[0] == level).findFirst().orElseThrow();
             double grid = 120 * (row[3] - row[4]) / Math.sqrt(n);
             double expected = (n - 4.0) / n * (row[1] - grid);
-            double density = SupWaldDistribution.upperTail(2, row[1] - 0.25) - SupWaldDistribution.upperTail(2, row[1] + 0.25);
-            double simulationSd = Math.sqrt(level * (1 - level) / replications) / (density / 0.5);
+            double density = (SupWaldDistribution.upperTail(2, row[1] - 0.25)
+                    - SupWaldDistribution.upperTail(2, row[1] + 0.25)) / 0.5;
+            double simulationSd = Math.sqrt(level * (1 - level) / replications) / density;
             double tolerance = 3 * Math.hypot(simulationSd, row[2]) + 0.05;
             assertEquals(expected, 2 * nullDistribution.criticalValue(level), tolerance, "level " + level);
         }
