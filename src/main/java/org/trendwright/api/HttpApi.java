@@ -1,0 +1,82 @@
+package org.trendwright.api;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import io.javalin.Javalin;
+import io.javalin.config.SizeUnit;
+import io.javalin.json.JavalinJackson;
+import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
+import java.time.Duration;
+import java.util.List;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.function.BooleanSupplier;
+import org.eclipse.jetty.server.handler.GracefulHandler;
+import org.trendwright.series.IntakeLimits;
+import org.trendwright.store.FitResultRepository;
+import org.trendwright.store.SeriesRepository;
+
+/**
+ * Builds the Javalin application: routes, the one error mapper, the JSON mapper, request logging
+ * and metrics, the body size limit, a gate that holds requests until the store is ready, and a
+ * graceful stop that lets requests in flight finish (up to {@code stopTimeout}) before the server
+ * closes.
+ */
+public final class HttpApi {
+
+    /**
+     * What the HTTP layer needs.
+     *
+     * @param series            the series store
+     * @param fits              the fit result store
+     * @param databaseReachable the health check of the store
+     * @param registry          the metrics registry /metrics shows
+     * @param mapper            the JSON mapper (see {@link JsonMapping})
+     * @param limits            intake limits
+     * @param maxBodyBytes      the largest request body accepted
+     * @param stopTimeout       how long a stop waits for requests in flight
+     * @param storeReady        completes when the store is migrated (and seeded); requests that
+     *                          arrive before wait for it, so the server can start while it migrates
+     */
+    public record Services(SeriesRepository series, FitResultRepository fits, BooleanSupplier databaseReachable,
+                           PrometheusMeterRegistry registry, ObjectMapper mapper, IntakeLimits limits,
+                           long maxBodyBytes, Duration stopTimeout, CompletableFuture<?> storeReady) {
+    }
+
+    /** A built, not yet started application and the routes it registered ("GET /api/series"). */
+    public record Built(Javalin app, List<String> routes) {
+    }
+
+    private HttpApi() {
+    }
+
+    public static Built create(Services services) {
+        List<String> routes = new CopyOnWriteArrayList<>();
+        Uploads uploads = new Uploads(services.mapper(), services.limits());
+        FitService fitService = new FitService(services.fits(), services.mapper(), services.registry());
+        RequestObserver observer = new RequestObserver(services.registry());
+        Javalin app = Javalin.create(config -> {
+            config.startup.showJavalinBanner = false;
+            config.startup.showOldJavalinVersionWarning = false;
+            config.jsonMapper(new JavalinJackson(services.mapper(), false));
+            config.http.maxRequestSize = services.maxBodyBytes();
+            config.jetty.multipartConfig.maxFileSize(services.maxBodyBytes(), SizeUnit.BYTES);
+            config.jetty.multipartConfig.maxTotalRequestSize(services.maxBodyBytes(), SizeUnit.BYTES);
+            config.jetty.modifyServer(server -> {
+                server.setStopTimeout(services.stopTimeout().toMillis());
+                server.setHandler(new GracefulHandler());
+            });
+            config.requestLogger.http(observer::observe);
+            config.events.handlerAdded(h -> {
+                if (h.getHttpMethod().isHttpMethod()) {
+                    routes.add(h.getHttpMethod().name() + " " + h.getPath());
+                }
+            });
+            ProblemMapper.register(config.routes);
+            config.routes.before(ctx -> services.storeReady().join());
+            new SeriesRoutes(services.series(), uploads).register(config.routes);
+            new FitRoutes(services.series(), fitService, uploads).register(config.routes);
+            new OperationsRoutes(services.databaseReachable(), services.registry()).register(config.routes);
+        });
+        return new Built(app, routes);
+    }
+}

@@ -1,0 +1,162 @@
+package org.trendwright.api;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonMappingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import io.javalin.http.Context;
+import io.javalin.http.UploadedFile;
+import java.io.IOException;
+import java.io.InputStream;
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Collectors;
+import org.trendwright.series.CsvIntake;
+import org.trendwright.series.Delimiters;
+import org.trendwright.series.IntakeLimits;
+import org.trendwright.series.IntakeOptions;
+import org.trendwright.series.JsonIntake;
+import org.trendwright.series.MissingValues;
+import org.trendwright.series.SeriesInput;
+
+/**
+ * Reads the series of an upload by its content type: application/json, text/csv (also
+ * text/plain, text/tab-separated-values, application/csv) as the raw body, or multipart/form-data
+ * with the CSV file in the part named {@code file}. Query parameters: {@code missing=refuse|gap},
+ * {@code delimiter=comma|semicolon|tab}, {@code name} (for a CSV without header, or one with a single series column). Thread-safe.
+ */
+final class Uploads {
+
+    private final ObjectMapper mapper;
+    private final IntakeLimits limits;
+
+    Uploads(ObjectMapper mapper, IntakeLimits limits) {
+        this.mapper = mapper;
+        this.limits = limits;
+    }
+
+    IntakeOptions options(Context ctx) {
+        String missing = ctx.queryParam("missing");
+        MissingValues policy = missing == null ? MissingValues.REFUSE : MissingValues.fromName(missing)
+                .orElseThrow(() -> new BadRequestException("missing", "missing must be 'refuse' or 'gap', got '"
+                        + missing + "'."));
+        String delimiterName = ctx.queryParam("delimiter");
+        Character delimiter = delimiterName == null ? null : Delimiters.fromName(delimiterName);
+        if (delimiterName != null && delimiter == null) {
+            throw new BadRequestException("delimiter", "delimiter must be comma, semicolon or tab, got '"
+                    + delimiterName + "'.");
+        }
+        return new IntakeOptions(policy, limits, delimiter, ctx.queryParam("name"));
+    }
+
+    /** Every series of a create request. */
+    List<SeriesInput> readMany(Context ctx) {
+        IntakeOptions options = options(ctx);
+        return switch (kind(ctx)) {
+            case JSON -> JsonIntake.readMany(json(ctx), options);
+            case CSV -> CsvIntake.read(ctx.bodyAsBytes(), options);
+            case MULTIPART -> CsvIntake.read(filePart(ctx), options);
+        };
+    }
+
+    /** The one series of a revision request. */
+    SeriesInput readOne(Context ctx) {
+        IntakeOptions options = options(ctx);
+        List<SeriesInput> inputs = switch (kind(ctx)) {
+            case JSON -> List.of(JsonIntake.readOne(json(ctx), "", false));
+            case CSV -> CsvIntake.read(ctx.bodyAsBytes(), options);
+            case MULTIPART -> CsvIntake.read(filePart(ctx), options);
+        };
+        if (inputs.size() != 1) {
+            throw new BadRequestException(422, "invalid-upload", null, "A new version takes one series, but the"
+                    + " upload holds " + inputs.size() + ": " + inputs.stream().map(SeriesInput::name)
+                    .collect(Collectors.joining(", ")) + ".");
+        }
+        return inputs.get(0);
+    }
+
+    JsonNode json(Context ctx) {
+        try {
+            return mapper.readTree(ctx.bodyAsBytes());
+        } catch (JsonProcessingException e) {
+            throw unreadableJson(e);
+        } catch (IOException e) {
+            throw new BadRequestException(null, "The request body could not be read: " + e.getMessage());
+        }
+    }
+
+    /** Reads the body as a record of type {@code type}. */
+    <T> T body(Context ctx, Class<T> type) {
+        requireJson(ctx);
+        try {
+            return mapper.readValue(ctx.bodyAsBytes(), type);
+        } catch (JsonProcessingException e) {
+            throw unreadableJson(e);
+        } catch (IOException e) {
+            throw new BadRequestException(null, "The request body could not be read: " + e.getMessage());
+        }
+    }
+
+    static BadRequestException unreadableJson(JsonProcessingException e) {
+        String field = e instanceof JsonMappingException m && !m.getPath().isEmpty() ? path(m) : null;
+        String where = e.getLocation() == null ? "" : " at line " + e.getLocation().getLineNr() + ", column "
+                + e.getLocation().getColumnNr();
+        String what = e.getOriginalMessage().split("\n")[0];
+        return new BadRequestException(field, "The JSON body could not be read" + where
+                + (field == null ? "" : " (field " + field + ")") + ": " + what);
+    }
+
+    private static String path(JsonMappingException e) {
+        StringBuilder path = new StringBuilder();
+        for (JsonMappingException.Reference ref : e.getPath()) {
+            if (ref.getFieldName() != null) {
+                path.append(path.length() == 0 ? "" : ".").append(ref.getFieldName());
+            } else if (ref.getIndex() >= 0) {
+                path.append('[').append(ref.getIndex()).append(']');
+            }
+        }
+        return path.toString();
+    }
+
+    private enum Kind { JSON, CSV, MULTIPART }
+
+    private static Kind kind(Context ctx) {
+        String type = ctx.contentType() == null ? "" : ctx.contentType().toLowerCase(Locale.ROOT);
+        if (type.startsWith("application/json")) {
+            return Kind.JSON;
+        }
+        if (type.startsWith("text/csv") || type.startsWith("text/plain") || type.startsWith("application/csv")
+                || type.startsWith("text/tab-separated-values")) {
+            return Kind.CSV;
+        }
+        if (type.startsWith("multipart/form-data")) {
+            return Kind.MULTIPART;
+        }
+        throw unsupported(type);
+    }
+
+    private static void requireJson(Context ctx) {
+        String type = ctx.contentType() == null ? "" : ctx.contentType().toLowerCase(Locale.ROOT);
+        if (!type.startsWith("application/json")) {
+            throw unsupported(type);
+        }
+    }
+
+    private static BadRequestException unsupported(String type) {
+        return new BadRequestException(415, "unsupported-media-type", "Content-Type", "Content type '" + type
+                + "' is not accepted here; send application/json, text/csv or multipart/form-data as documented"
+                + " in /api/openapi.json.");
+    }
+
+    private static byte[] filePart(Context ctx) {
+        UploadedFile file = ctx.uploadedFile("file");
+        if (file == null) {
+            throw new BadRequestException("file", "A multipart upload needs the CSV file in a part named 'file'.");
+        }
+        try (InputStream in = file.content()) {
+            return in.readAllBytes();
+        } catch (IOException e) {
+            throw new BadRequestException("file", "The uploaded file could not be read: " + e.getMessage());
+        }
+    }
+}

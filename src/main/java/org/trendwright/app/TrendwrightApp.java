@@ -1,0 +1,134 @@
+package org.trendwright.app;
+
+import io.javalin.Javalin;
+import io.micrometer.core.instrument.binder.jvm.JvmMemoryMetrics;
+import io.micrometer.core.instrument.binder.system.UptimeMetrics;
+import io.micrometer.prometheusmetrics.PrometheusConfig;
+import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.time.Clock;
+import java.util.List;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import org.trendwright.api.HttpApi;
+import org.trendwright.api.JsonMapping;
+import org.trendwright.series.IntakeLimits;
+import org.trendwright.store.Database;
+import org.trendwright.store.FitResultRepository;
+import org.trendwright.store.SeriesRepository;
+
+/**
+ * The factory that wires Trendwright from its collaborators (settings, store, clock) and starts
+ * it. Tests start it on port 0 with a fresh store; {@link Main} with the configured one.
+ * Thread-safe; {@link #close()} stops the server gracefully and closes the store if this app
+ * opened it.
+ */
+public final class TrendwrightApp implements AutoCloseable {
+
+    private static final Logger LOG = LoggerFactory.getLogger(TrendwrightApp.class);
+
+    private final Javalin server;
+    private final List<String> routes;
+    private final Database database;
+    private final boolean ownsDatabase;
+
+    private TrendwrightApp(Javalin server, List<String> routes, Database database, boolean ownsDatabase) {
+        this.server = server;
+        this.routes = routes;
+        this.database = database;
+        this.ownsDatabase = ownsDatabase;
+    }
+
+    /**
+     * Opens the configured store (creating the data directory for SQLite) and starts. The schema
+     * migrations and the demo data run while the HTTP server starts (requests wait for them); this
+     * returns once both are done.
+     */
+    public static TrendwrightApp start(Settings settings, Clock clock) {
+        if (settings.usesEmbeddedStore()) {
+            createDirectory(settings);
+        }
+        Database database = Database.connect(settings.jdbcUrl(), settings.databaseSchema(), settings.poolSize());
+        TrendwrightApp app = null;
+        try {
+            CompletableFuture<Void> ready = CompletableFuture.runAsync(() -> {
+                database.migrate();
+                seed(settings, new SeriesRepository(database, clock));
+            });
+            app = start(settings, database, clock, true, ready);
+            ready.join();
+            return app;
+        } catch (RuntimeException e) {
+            if (app != null) {
+                app.close();
+            } else {
+                database.close();
+            }
+            throw e instanceof CompletionException && e.getCause() instanceof RuntimeException cause ? cause : e;
+        }
+    }
+
+    /** Starts on a store opened and migrated by the caller, who keeps closing it. */
+    public static TrendwrightApp start(Settings settings, Database database, Clock clock) {
+        seed(settings, new SeriesRepository(database, clock));
+        return start(settings, database, clock, false, CompletableFuture.completedFuture(null));
+    }
+
+    private static void seed(Settings settings, SeriesRepository series) {
+        if (settings.loadDemoData()) {
+            DemoData.loadIfEmpty(series, limits(settings));
+        }
+    }
+
+    private static IntakeLimits limits(Settings settings) {
+        return new IntakeLimits(settings.maxObservationsPerSeries(), settings.maxSeriesPerUpload());
+    }
+
+    private static TrendwrightApp start(Settings settings, Database database, Clock clock, boolean owns,
+                                        CompletableFuture<?> ready) {
+        SeriesRepository series = new SeriesRepository(database, clock);
+        IntakeLimits limits = limits(settings);
+        PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
+        new JvmMemoryMetrics().bindTo(registry);
+        new UptimeMetrics().bindTo(registry);
+        HttpApi.Built built = HttpApi.create(new HttpApi.Services(series, new FitResultRepository(database, clock),
+                database::isReachable, registry, JsonMapping.create(), limits, settings.maxBodyBytes(),
+                settings.shutdownGrace(), ready));
+        built.app().start(settings.host(), settings.port());
+        LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={}", settings.host(), built.app().port(),
+                database.dialect().name().toLowerCase(java.util.Locale.ROOT),
+                java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
+        return new TrendwrightApp(built.app(), built.routes(), database, owns);
+    }
+
+    private static void createDirectory(Settings settings) {
+        try {
+            Files.createDirectories(settings.dataDirectory());
+        } catch (IOException e) {
+            throw new UncheckedIOException("Cannot create the data directory " + settings.dataDirectory(), e);
+        }
+    }
+
+    /** The port the server listens on (the real one when started on port 0). */
+    public int port() {
+        return server.port();
+    }
+
+    /** Every registered route as "METHOD /path/{param}". */
+    public List<String> routes() {
+        return List.copyOf(routes);
+    }
+
+    @Override
+    public void close() {
+        server.stop();
+        if (ownsDatabase) {
+            database.close();
+        }
+        LOG.info("event=stopped");
+    }
+}
