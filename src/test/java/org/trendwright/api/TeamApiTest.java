@@ -25,6 +25,7 @@ import org.junit.jupiter.params.ParameterizedClass;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.trendwright.testing.FreshStore;
 import org.trendwright.testing.RunningServer;
+import org.trendwright.team.TeamSettings;
 import org.trendwright.testing.TeamAccess;
 
 /** Setup, sign-in, members, tokens and the audit log through the running server, on both stores. */
@@ -102,6 +103,20 @@ class TeamApiTest {
                 .body("csrfToken", equalTo(ann.csrf()));
         as(ann).delete("/api/session").then().statusCode(204);
         as(ann).get("/api/session").then().statusCode(401).header("WWW-Authenticate", "Bearer");
+    }
+
+    @Test
+    void a_session_idle_longer_than_the_setting_ends_on_the_server() throws InterruptedException {
+        server.close();
+        TeamSettings base = TeamAccess.testSettings();
+        server = RunningServer.start(kind, new TeamSettings(base.setupCode(), java.time.Duration.ofMillis(300),
+                base.slowAfter(), base.slowStep(), base.lockAfter(), base.lockFor()));
+        addMember("ann", "viewer");
+        Browser ann = browser("ann");
+        as(ann).get("/api/session").then().statusCode(200);
+        Thread.sleep(600);
+        as(ann).get("/api/session").then().statusCode(401);
+        server.given().get("/api/session").then().statusCode(200);
     }
 
     @Test
