@@ -59,6 +59,7 @@ public final class HttpApi {
             config.startup.showOldJavalinVersionWarning = false;
             config.jsonMapper(new JavalinJackson(services.mapper(), false));
             config.http.maxRequestSize = services.maxBodyBytes();
+            config.http.prefer405over404 = true;
             config.jetty.multipartConfig.maxFileSize(services.maxBodyBytes(), SizeUnit.BYTES);
             config.jetty.multipartConfig.maxTotalRequestSize(services.maxBodyBytes(), SizeUnit.BYTES);
             config.jetty.modifyServer(server -> {
