@@ -36,10 +36,13 @@ public final class HttpApi {
      * @param stopTimeout       how long a stop waits for requests in flight
      * @param storeReady        completes when the store is migrated (and seeded); requests that
      *                          arrive before wait for it, so the server can start while it migrates
+     * @param maxConcurrentFits fits that may run at once
+     * @param maxQueuedFits     fits that may wait for a turn; beyond both the fit routes answer 503
      */
     public record Services(SeriesRepository series, FitResultRepository fits, BooleanSupplier databaseReachable,
                            PrometheusMeterRegistry registry, ObjectMapper mapper, IntakeLimits limits,
-                           long maxBodyBytes, Duration stopTimeout, CompletableFuture<?> storeReady) {
+                           long maxBodyBytes, Duration stopTimeout, CompletableFuture<?> storeReady,
+                           int maxConcurrentFits, int maxQueuedFits) {
     }
 
     /** A built, not yet started application and the routes it registered ("GET /api/series"). */
@@ -75,7 +78,8 @@ public final class HttpApi {
             ProblemMapper.register(config.routes);
             config.routes.before(ctx -> services.storeReady().join());
             new SeriesRoutes(services.series(), uploads).register(config.routes);
-            new FitRoutes(services.series(), fitService, uploads).register(config.routes);
+            new FitRoutes(services.series(), fitService, uploads,
+                    new FitGate(services.maxConcurrentFits(), services.maxQueuedFits())).register(config.routes);
             new OperationsRoutes(services.databaseReachable(), services.registry()).register(config.routes);
         });
         return new Built(app, routes);

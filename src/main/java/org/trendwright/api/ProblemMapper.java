@@ -25,6 +25,7 @@ import org.trendwright.series.VersionConflictException;
  *   <tr><td>ModelException (the core's)</td><td>422 with the core's message</td></tr>
  *   <tr><td>SeriesNotFoundException</td><td>404</td></tr>
  *   <tr><td>VersionConflictException</td><td>412 (stale If-Match)</td></tr>
+ *   <tr><td>ServerBusyException</td><td>503 with Retry-After (fitting capacity and queue are full)</td></tr>
  *   <tr><td>Javalin's HttpResponseException</td><td>its status (404 no route, 405, 413 body too large)</td></tr>
  *   <tr><td>anything else</td><td>500 with an error id; logged with the stack trace under that id</td></tr>
  * </table>
@@ -50,6 +51,10 @@ public final class ProblemMapper {
                 send(ctx, 404, "not-found", e.getMessage(), null, null, null));
         routes.exception(VersionConflictException.class, (e, ctx) ->
                 send(ctx, 412, "stale-version", e.getMessage(), null, null, "If-Match"));
+        routes.exception(ServerBusyException.class, (e, ctx) -> {
+            ctx.header("Retry-After", Integer.toString(ServerBusyException.RETRY_AFTER_SECONDS));
+            send(ctx, 503, "server-busy", e.getMessage(), null, null, null);
+        });
         routes.exception(HttpResponseException.class, (e, ctx) ->
                 send(ctx, e.getStatus(), slug(HttpStatus.forStatus(e.getStatus()).getMessage()),
                         httpDetail(e, ctx), null, null, null));
@@ -114,6 +119,7 @@ public final class ProblemMapper {
             case "insufficient-data", "non-positive-value", "rank-deficient-design", "invalid-specification" ->
                     "The data cannot support this model";
             case "stale-version" -> "The series has changed since the version named in If-Match";
+            case "server-busy" -> "The server is at capacity; retry later";
             default -> HttpStatus.forStatus(status).getMessage();
         };
     }

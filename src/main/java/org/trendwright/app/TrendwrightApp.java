@@ -97,7 +97,7 @@ public final class TrendwrightApp implements AutoCloseable {
         new UptimeMetrics().bindTo(registry);
         HttpApi.Built built = HttpApi.create(new HttpApi.Services(series, new FitResultRepository(database, clock),
                 database::isReachable, registry, JsonMapping.create(), limits, settings.maxBodyBytes(),
-                settings.shutdownGrace(), ready));
+                settings.shutdownGrace(), ready, settings.maxConcurrentFits(), settings.maxQueuedFits()));
         built.app().start(settings.host(), settings.port());
         LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={}", settings.host(), built.app().port(),
                 database.dialect().name().toLowerCase(java.util.Locale.ROOT),
