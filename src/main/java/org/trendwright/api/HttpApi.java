@@ -13,6 +13,7 @@ import java.util.function.BooleanSupplier;
 import org.eclipse.jetty.server.handler.GracefulHandler;
 import org.trendwright.series.IntakeLimits;
 import org.trendwright.store.FitResultRepository;
+import org.trendwright.store.JobRepository;
 import org.trendwright.store.SeriesRepository;
 
 /**
@@ -38,11 +39,12 @@ public final class HttpApi {
      *                          arrive before wait for it, so the server can start while it migrates
      * @param maxConcurrentFits fits that may run at once
      * @param maxQueuedFits     fits that may wait for a turn; beyond both the fit routes answer 503
+     * @param jobs              the batch fitting job store
      */
     public record Services(SeriesRepository series, FitResultRepository fits, BooleanSupplier databaseReachable,
                            PrometheusMeterRegistry registry, ObjectMapper mapper, IntakeLimits limits,
                            long maxBodyBytes, Duration stopTimeout, CompletableFuture<?> storeReady,
-                           int maxConcurrentFits, int maxQueuedFits) {
+                           int maxConcurrentFits, int maxQueuedFits, JobRepository jobs) {
     }
 
     /** A built, not yet started application and the routes it registered ("GET /api/series"). */
@@ -80,6 +82,7 @@ public final class HttpApi {
             new SeriesRoutes(services.series(), uploads).register(config.routes);
             new FitRoutes(services.series(), fitService, uploads,
                     new FitGate(services.maxConcurrentFits(), services.maxQueuedFits())).register(config.routes);
+            new JobRoutes(services.jobs(), uploads).register(config.routes);
             new OperationsRoutes(services.databaseReachable(), services.registry()).register(config.routes);
         });
         return new Built(app, routes);

@@ -18,7 +18,9 @@ import org.trendwright.api.HttpApi;
 import org.trendwright.api.JsonMapping;
 import org.trendwright.series.IntakeLimits;
 import org.trendwright.store.Database;
+import org.trendwright.jobs.JobWorker;
 import org.trendwright.store.FitResultRepository;
+import org.trendwright.store.JobRepository;
 import org.trendwright.store.SeriesRepository;
 
 /**
@@ -35,12 +37,15 @@ public final class TrendwrightApp implements AutoCloseable {
     private final List<String> routes;
     private final Database database;
     private final boolean ownsDatabase;
+    private final JobWorker worker;
 
-    private TrendwrightApp(Javalin server, List<String> routes, Database database, boolean ownsDatabase) {
+    private TrendwrightApp(Javalin server, List<String> routes, Database database, boolean ownsDatabase,
+                           JobWorker worker) {
         this.server = server;
         this.routes = routes;
         this.database = database;
         this.ownsDatabase = ownsDatabase;
+        this.worker = worker;
     }
 
     /**
@@ -95,14 +100,17 @@ public final class TrendwrightApp implements AutoCloseable {
         PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
         new JvmMemoryMetrics().bindTo(registry);
         new UptimeMetrics().bindTo(registry);
+        JobRepository jobs = new JobRepository(database, clock);
         HttpApi.Built built = HttpApi.create(new HttpApi.Services(series, new FitResultRepository(database, clock),
                 database::isReachable, registry, JsonMapping.create(), limits, settings.maxBodyBytes(),
-                settings.shutdownGrace(), ready, settings.maxConcurrentFits(), settings.maxQueuedFits()));
+                settings.shutdownGrace(), ready, settings.maxConcurrentFits(), settings.maxQueuedFits(), jobs));
         built.app().start(settings.host(), settings.port());
         LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={}", settings.host(), built.app().port(),
                 database.dialect().name().toLowerCase(java.util.Locale.ROOT),
                 java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
-        return new TrendwrightApp(built.app(), built.routes(), database, owns);
+        // Workers start once the store is migrated; requests wait for the same moment.
+        JobWorker worker = new JobWorker(jobs, series, settings.jobWorkers(), settings.jobLease(), ready);
+        return new TrendwrightApp(built.app(), built.routes(), database, owns, worker);
     }
 
     private static void createDirectory(Settings settings) {
@@ -125,6 +133,7 @@ public final class TrendwrightApp implements AutoCloseable {
 
     @Override
     public void close() {
+        worker.close();
         server.stop();
         if (ownsDatabase) {
             database.close();
