@@ -10,6 +10,7 @@ for t = 0, 119 do
   points[#points + 1] = string.format('{"period": "%d-%02d", "value": %.4f}', year, month, value)
 end
 wrk.method = "POST"
+wrk.path = "/api/fit"
 wrk.headers["Content-Type"] = "application/json"
 wrk.body = '{"series": {"name": "bench", "observations": [' .. table.concat(points, ", ") ..
   ']}, "model": {"family": "trend", "scale": "log", "seasonal": true}, "horizon": 12}'
