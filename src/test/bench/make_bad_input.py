@@ -283,6 +283,10 @@ case("over-limit-whitespace", "/api/fit", JSON, None, 413, "", repeat={
     "prefix": "{", "unit": "          ", "count": 1100000, "suffix": "}"})
 case("too-many-observations", "/api/series", CSV, None, 422, "", repeat={
     "prefix": "period,value\n", "unit": "{i},1\n", "count": 100001, "suffix": "", "index": "day"})
+case("csv-tiny-rows-past-the-limit", "/api/series", CSV, None, 422, "", repeat={
+    "prefix": "period,value\n", "unit": "2024-Q1,1\n", "count": 1000000, "suffix": ""})
+case("csv-tiny-rows-no-header", "/api/series", CSV, None, 422, "", repeat={
+    "prefix": "", "unit": "2024-Q1,1\n", "count": 1000000, "suffix": ""})
 case("too-many-series", "/api/series", CSV, None, 422, "", repeat={
     "prefix": "period", "unit": ",s{i}", "count": 1001, "suffix": "\n2024-Q1" + ",1" * 1001 + "\n"})
 
@@ -352,6 +356,7 @@ FRAGMENTS = [
     ("csv-ragged-", "every row needs the same number of cells"),
     ("csv-million-cells", "the row has 1000001 cells"),
     ("csv-million-columns", "only a header row"),
+    ("csv-tiny-rows-", "the file holds more than 200002 rows"),
     ("csv-header-only", "only a header row"),
     ("csv-one-column", "a series needs a period column and a value column"),
     ("csv-only-spaces", "a series needs a period column and a value column"),

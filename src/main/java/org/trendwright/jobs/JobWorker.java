@@ -71,7 +71,10 @@ public final class JobWorker implements AutoCloseable {
                 return;
             } catch (RuntimeException e) {
                 // A store outage: the claimed items' leases run out and they are claimed again later.
-                LOG.warn("event=job-worker-error worker={} message={}", worker, e.getMessage());
+                if (running) {
+                    LOG.warn("event=job-worker-error worker={} message={} cause={}", worker, e.getMessage(),
+                            e.getCause() == null ? "" : e.getCause().getMessage());
+                }
                 sleepQuietly();
             }
         }
