@@ -12,7 +12,8 @@ import org.trendwright.store.SeriesRepository;
 
 /**
  * The fit routes: a stored series version (result kept per version and model; the header
- * {@code X-Trendwright-Cache} says hit or miss) and posted data (stores nothing). Thread-safe.
+ * {@code X-Trendwright-Cache} says hit or miss) and posted data (stores nothing). Both pass the
+ * {@link FitGate}: beyond capacity they answer 503 with Retry-After. Thread-safe.
  */
 final class FitRoutes {
 
@@ -22,11 +23,13 @@ final class FitRoutes {
     private final SeriesRepository repository;
     private final FitService fits;
     private final Uploads uploads;
+    private final FitGate gate;
 
-    FitRoutes(SeriesRepository repository, FitService fits, Uploads uploads) {
+    FitRoutes(SeriesRepository repository, FitService fits, Uploads uploads, FitGate gate) {
         this.repository = repository;
         this.fits = fits;
         this.uploads = uploads;
+        this.gate = gate;
     }
 
     void register(RoutesConfig routes) {
@@ -37,7 +40,7 @@ final class FitRoutes {
     private void fitStored(Context ctx) {
         FitRequest request = uploads.body(ctx, FitRequest.class);
         SeriesVersion version = repository.version(SeriesRoutes.id(ctx), SeriesRoutes.number(ctx, "version"));
-        FitService.Answer answer = fits.stored(version, request);
+        FitService.Answer answer = gate.run(() -> fits.stored(version, request));
         ctx.header("X-Trendwright-Cache", answer.cached() ? "hit" : "miss");
         ctx.header("ETag", ETags.of(version.seriesId(), version.version()));
         ctx.contentType("application/json").result(answer.json());
@@ -55,6 +58,6 @@ final class FitRoutes {
         SeriesInput named = new SeriesInput(input.name() == null ? POSTED_NAME : input.name(), input.where(),
                 input.changes());
         SeriesDraft draft = SeriesAssembly.create(named, options);
-        ctx.json(fits.stateless(draft.name(), draft.frequency(), draft.points(), fit));
+        ctx.json(gate.run(() -> fits.stateless(draft.name(), draft.frequency(), draft.points(), fit)));
     }
 }

@@ -16,6 +16,7 @@ import java.time.Clock;
 import org.trendwright.store.AuditRepository;
 import org.trendwright.store.BriefRepository;
 import org.trendwright.store.FitResultRepository;
+import org.trendwright.store.JobRepository;
 import org.trendwright.store.MemberRepository;
 import org.trendwright.store.TokenRepository;
 import org.trendwright.team.SetupCode;
@@ -43,10 +44,14 @@ public final class HttpApi {
      * @param stopTimeout       how long a stop waits for requests in flight
      * @param storeReady        completes when the store is migrated (and seeded); requests that
      *                          arrive before wait for it, so the server can start while it migrates
+     * @param maxConcurrentFits fits that may run at once
+     * @param maxQueuedFits     fits that may wait for a turn; beyond both the fit routes answer 503
+     * @param jobs              the batch fitting job store
      */
     public record Services(SeriesRepository series, FitResultRepository fits, BooleanSupplier databaseReachable,
                            PrometheusMeterRegistry registry, ObjectMapper mapper, IntakeLimits limits,
-                           long maxBodyBytes, Duration stopTimeout, CompletableFuture<?> storeReady) {
+                           long maxBodyBytes, Duration stopTimeout, CompletableFuture<?> storeReady,
+                           int maxConcurrentFits, int maxQueuedFits, JobRepository jobs) {
     }
 
     /**
@@ -74,6 +79,7 @@ public final class HttpApi {
             config.startup.showOldJavalinVersionWarning = false;
             config.jsonMapper(new JavalinJackson(services.mapper(), false));
             config.http.maxRequestSize = services.maxBodyBytes();
+            config.http.prefer405over404 = true;
             config.jetty.multipartConfig.maxFileSize(services.maxBodyBytes(), SizeUnit.BYTES);
             config.jetty.multipartConfig.maxTotalRequestSize(services.maxBodyBytes(), SizeUnit.BYTES);
             config.jetty.modifyServer(server -> {
@@ -90,7 +96,9 @@ public final class HttpApi {
             config.routes.before(ctx -> services.storeReady().join());
             new AuthGate(team.members(), team.tokens(), team.audit(), team.settings()).register(config.routes);
             new SeriesRoutes(services.series(), uploads).register(config.routes);
-            new FitRoutes(services.series(), fitService, uploads).register(config.routes);
+            new FitRoutes(services.series(), fitService, uploads,
+                    new FitGate(services.maxConcurrentFits(), services.maxQueuedFits())).register(config.routes);
+            new JobRoutes(services.jobs(), uploads).register(config.routes);
             new TeamRoutes(team, uploads).register(config.routes);
             new BriefRoutes(services.series(), team.briefs(), fitService, uploads, services.mapper(), team.clock())
                     .register(config.routes);

@@ -27,6 +27,7 @@ import org.trendwright.team.TeamException;
  *   <tr><td>SeriesNotFoundException</td><td>404</td></tr>
  *   <tr><td>VersionConflictException</td><td>412 (stale If-Match)</td></tr>
  *   <tr><td>TeamException</td><td>its status: 401, 403, 404, 409 (last admin), 429 (sign-in lock-out)</td></tr>
+ *   <tr><td>ServerBusyException</td><td>503 with Retry-After (fitting capacity and queue are full)</td></tr>
  *   <tr><td>Javalin's HttpResponseException</td><td>its status (404 no route, 405, 413 body too large)</td></tr>
  *   <tr><td>anything else</td><td>500 with an error id; logged with the stack trace under that id</td></tr>
  * </table>
@@ -57,6 +58,10 @@ public final class ProblemMapper {
                 ctx.header("WWW-Authenticate", "Bearer");
             }
             send(ctx, e.status(), e.type(), e.getMessage(), null, null, null);
+        });
+        routes.exception(ServerBusyException.class, (e, ctx) -> {
+            ctx.header("Retry-After", Integer.toString(ServerBusyException.RETRY_AFTER_SECONDS));
+            send(ctx, 503, "server-busy", e.getMessage(), null, null, null);
         });
         routes.exception(HttpResponseException.class, (e, ctx) ->
                 send(ctx, e.getStatus(), slug(HttpStatus.forStatus(e.getStatus()).getMessage()),
@@ -122,6 +127,7 @@ public final class ProblemMapper {
             case "insufficient-data", "non-positive-value", "rank-deficient-design", "invalid-specification" ->
                     "The data cannot support this model";
             case "stale-version" -> "The series has changed since the version named in If-Match";
+            case "server-busy" -> "The server is at capacity; retry later";
             default -> HttpStatus.forStatus(status).getMessage();
         };
     }

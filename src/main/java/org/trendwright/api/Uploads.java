@@ -1,11 +1,13 @@
 package org.trendwright.api;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonMappingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import io.javalin.http.Context;
 import io.javalin.http.UploadedFile;
+import org.eclipse.jetty.http.BadMessageException;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.List;
@@ -77,7 +79,8 @@ final class Uploads {
 
     JsonNode json(Context ctx) {
         try {
-            return mapper.readTree(ctx.bodyAsBytes());
+            // Trailing tokens are refused: a second document after the first would otherwise be ignored.
+            return mapper.reader().with(DeserializationFeature.FAIL_ON_TRAILING_TOKENS).readTree(ctx.bodyAsBytes());
         } catch (JsonProcessingException e) {
             throw unreadableJson(e);
         } catch (IOException e) {
@@ -89,7 +92,8 @@ final class Uploads {
     <T> T body(Context ctx, Class<T> type) {
         requireJson(ctx);
         try {
-            return mapper.readValue(ctx.bodyAsBytes(), type);
+            return mapper.readerFor(type).with(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+                    .readValue(ctx.bodyAsBytes());
         } catch (JsonProcessingException e) {
             throw unreadableJson(e);
         } catch (IOException e) {
@@ -149,7 +153,7 @@ final class Uploads {
     }
 
     private static byte[] filePart(Context ctx) {
-        UploadedFile file = ctx.uploadedFile("file");
+        UploadedFile file = uploadedFile(ctx);
         if (file == null) {
             throw new BadRequestException("file", "A multipart upload needs the CSV file in a part named 'file'.");
         }
@@ -157,6 +161,23 @@ final class Uploads {
             return in.readAllBytes();
         } catch (IOException e) {
             throw new BadRequestException("file", "The uploaded file could not be read: " + e.getMessage());
+        }
+    }
+
+    /** The part named file; a body Jetty cannot split into parts is the client's error, not the server's. */
+    private static UploadedFile uploadedFile(Context ctx) {
+        try {
+            return ctx.uploadedFile("file");
+        } catch (Exception e) {
+            for (Throwable t = e; t != null; t = t.getCause()) {
+                if (t instanceof BadMessageException bad) {
+                    throw new BadRequestException(bad.getCode() == 413 ? 413 : 400, bad.getCode() == 413
+                            ? "payload-too-large" : "bad-request", "file", "The multipart body could not be read ("
+                            + bad.getReason() + "); send the CSV as a part named 'file' with the boundary named in"
+                            + " the Content-Type header.");
+                }
+            }
+            throw e;
         }
     }
 }

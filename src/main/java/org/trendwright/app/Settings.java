@@ -23,12 +23,29 @@ import java.util.function.Function;
  *   max-series-per-upload  1000             most series per upload
  *   demo-data              true             load the demo series into an empty store at start
  *   shutdown-grace-seconds 10               how long a stop waits for requests in flight
+ *   max-concurrent-fits    (processor cores)  fits that run at once
+ *   max-queued-fits        (4 x cores)      fits that wait for a turn; beyond both a fit answers 503
+ *   job-workers            (processor cores)  background threads judging batch-job series (0: none)
+ *   job-lease-seconds      60               how long a claimed job item is held before others may retake it
  * </pre>
  * Immutable and thread-safe.
  */
 public record Settings(String host, int port, Path dataDirectory, String databaseUrl, String databaseSchema,
                        int poolSize, long maxBodyBytes, int maxObservationsPerSeries, int maxSeriesPerUpload,
-                       boolean loadDemoData, Duration shutdownGrace) {
+                       boolean loadDemoData, Duration shutdownGrace, int maxConcurrentFits, int maxQueuedFits,
+                       int jobWorkers, Duration jobLease) {
+
+    /** The settings with the default fitting capacity (one fit per processor core, a queue of four per core). */
+    public Settings(String host, int port, Path dataDirectory, String databaseUrl, String databaseSchema,
+                    int poolSize, long maxBodyBytes, int maxObservationsPerSeries, int maxSeriesPerUpload,
+                    boolean loadDemoData, Duration shutdownGrace) {
+        this(host, port, dataDirectory, databaseUrl, databaseSchema, poolSize, maxBodyBytes, maxObservationsPerSeries,
+                maxSeriesPerUpload, loadDemoData, shutdownGrace, cores(), 4 * cores(), cores(), Duration.ofSeconds(60));
+    }
+
+    private static int cores() {
+        return Runtime.getRuntime().availableProcessors();
+    }
 
     /** The defaults listed above. */
     public static Settings defaults() {
@@ -57,7 +74,11 @@ public record Settings(String host, int port, Path dataDirectory, String databas
                 r.get("max-observations", 100_000, Integer::parseInt),
                 r.get("max-series-per-upload", 1_000, Integer::parseInt),
                 r.get("demo-data", true, Settings::bool),
-                Duration.ofSeconds(r.get("shutdown-grace-seconds", 10, Integer::parseInt)));
+                Duration.ofSeconds(r.get("shutdown-grace-seconds", 10, Integer::parseInt)),
+                r.get("max-concurrent-fits", cores(), Integer::parseInt),
+                r.get("max-queued-fits", 4 * cores(), Integer::parseInt),
+                r.get("job-workers", cores(), Integer::parseInt),
+                Duration.ofSeconds(r.get("job-lease-seconds", 60, Integer::parseInt)));
         r.refuseUnknown(flags);
         return settings;
     }
@@ -76,7 +97,22 @@ public record Settings(String host, int port, Path dataDirectory, String databas
     /** These settings with another port (tests start on port 0). */
     public Settings withPort(int newPort) {
         return new Settings(host, newPort, dataDirectory, databaseUrl, databaseSchema, poolSize, maxBodyBytes,
-                maxObservationsPerSeries, maxSeriesPerUpload, loadDemoData, shutdownGrace);
+                maxObservationsPerSeries, maxSeriesPerUpload, loadDemoData, shutdownGrace, maxConcurrentFits,
+                maxQueuedFits, jobWorkers, jobLease);
+    }
+
+    /** These settings with another fitting capacity. */
+    public Settings withFitCapacity(int concurrent, int queued) {
+        return new Settings(host, port, dataDirectory, databaseUrl, databaseSchema, poolSize, maxBodyBytes,
+                maxObservationsPerSeries, maxSeriesPerUpload, loadDemoData, shutdownGrace, concurrent, queued,
+                jobWorkers, jobLease);
+    }
+
+    /** These settings with another number of job workers and lease. */
+    public Settings withJobWorkers(int workers, Duration lease) {
+        return new Settings(host, port, dataDirectory, databaseUrl, databaseSchema, poolSize, maxBodyBytes,
+                maxObservationsPerSeries, maxSeriesPerUpload, loadDemoData, shutdownGrace, maxConcurrentFits,
+                maxQueuedFits, workers, lease);
     }
 
     private static Map<String, String> flag(String arg) {

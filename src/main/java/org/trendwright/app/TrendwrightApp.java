@@ -18,9 +18,11 @@ import org.trendwright.api.HttpApi;
 import org.trendwright.api.JsonMapping;
 import org.trendwright.series.IntakeLimits;
 import org.trendwright.store.Database;
+import org.trendwright.jobs.JobWorker;
 import org.trendwright.store.AuditRepository;
 import org.trendwright.store.BriefRepository;
 import org.trendwright.store.FitResultRepository;
+import org.trendwright.store.JobRepository;
 import org.trendwright.store.MemberRepository;
 import org.trendwright.store.TokenRepository;
 import org.trendwright.team.SetupCode;
@@ -43,15 +45,17 @@ public final class TrendwrightApp implements AutoCloseable {
     private final boolean ownsDatabase;
     private final HttpApi.Team team;
     private final String host;
+    private final JobWorker worker;
 
     private TrendwrightApp(Javalin server, List<String> routes, Database database, boolean ownsDatabase,
-                           HttpApi.Team team, String host) {
+                           HttpApi.Team team, String host, JobWorker worker) {
         this.server = server;
         this.routes = routes;
         this.database = database;
         this.ownsDatabase = ownsDatabase;
         this.team = team;
         this.host = host;
+        this.worker = worker;
     }
 
     /**
@@ -117,14 +121,17 @@ public final class TrendwrightApp implements AutoCloseable {
         PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
         new JvmMemoryMetrics().bindTo(registry);
         new UptimeMetrics().bindTo(registry);
+        JobRepository jobs = new JobRepository(database, clock);
         HttpApi.Built built = HttpApi.create(new HttpApi.Services(series, new FitResultRepository(database, clock),
                 database::isReachable, registry, JsonMapping.create(), limits, settings.maxBodyBytes(),
-                settings.shutdownGrace(), ready), team);
+                settings.shutdownGrace(), ready, settings.maxConcurrentFits(), settings.maxQueuedFits(), jobs), team);
         built.app().start(settings.host(), settings.port());
         LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={}", settings.host(), built.app().port(),
                 database.dialect().name().toLowerCase(java.util.Locale.ROOT),
                 java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
-        return new TrendwrightApp(built.app(), built.routes(), database, owns, team, settings.host());
+        // Workers start once the store is migrated; requests wait for the same moment.
+        JobWorker worker = new JobWorker(jobs, series, settings.jobWorkers(), settings.jobLease(), ready);
+        return new TrendwrightApp(built.app(), built.routes(), database, owns, team, settings.host(), worker);
     }
 
     /**
@@ -167,6 +174,7 @@ public final class TrendwrightApp implements AutoCloseable {
 
     @Override
     public void close() {
+        worker.close();
         server.stop();
         if (ownsDatabase) {
             database.close();

@@ -38,7 +38,7 @@ public final class CsvIntake {
     public static List<SeriesInput> read(byte[] body, IntakeOptions options) {
         String text = decode(body);
         char delimiter = options.delimiter() != null ? options.delimiter() : Delimiters.detect(text);
-        List<CsvRow> rows = parse(text, delimiter);
+        List<CsvRow> rows = parse(text, delimiter, options.limits());
         if (rows.isEmpty()) {
             throw new IntakeException(Reason.INVALID_VALUE, Where.NOWHERE, "the file holds no rows; send a header"
                     + " and at least one row of period and value.");
@@ -63,20 +63,51 @@ public final class CsvIntake {
         }
     }
 
-    private static List<CsvRow> parse(String text, char delimiter) {
+    private static List<CsvRow> parse(String text, char delimiter, IntakeLimits limits) {
         CSVFormat format = CSVFormat.RFC4180.builder().setDelimiter(delimiter).setIgnoreEmptyLines(true)
                 .setTrim(true).get();
         LineIndex lines = new LineIndex(text);
         List<CsvRow> rows = new ArrayList<>();
         try (CSVParser parser = CSVParser.builder().setReader(new StringReader(text)).setFormat(format).get()) {
+            long cap = Long.MAX_VALUE;
             for (CSVRecord record : parser) {
                 rows.add(new CsvRow(record.toList(), lines.lineAt(record.getCharacterPosition())));
+                if (rows.size() == 2) {
+                    cap = rowCap(rows, limits);
+                }
+                if (rows.size() > cap) {
+                    throw tooManyRows(rows.get(rows.size() - 1), cap, limits);
+                }
             }
         } catch (IOException | UncheckedIOException | IllegalStateException e) {
             throw new IntakeException(Reason.INVALID_VALUE, Where.line(lines.lastLine()), "the file is not valid"
                     + " CSV (" + e.getMessage() + "); check for an unbalanced double quote.");
         }
         return rows;
+    }
+
+    /**
+     * Twice the most rows a file like this one can hold without breaking a limit (a wide file: one
+     * row per period of its series plus a header; a long file: one row per observation of every
+     * series plus a header). Parsing stops past it, so a body of many tiny rows cannot fill the
+     * heap before the limits are checked; a file only just over a limit still reaches the exact
+     * message of that limit.
+     */
+    private static long rowCap(List<CsvRow> firstTwo, IntakeLimits limits) {
+        long perSeries = 2 * (limits.maxObservationsPerSeries() + 1L);
+        CsvRow first = firstTwo.get(0);
+        boolean threeColumns = first.cells().size() == 3 && firstTwo.get(1).cells().size() == 3;
+        if (threeColumns && CsvLayout.detect(firstTwo).longFormat()) {
+            return perSeries * limits.maxSeriesPerUpload();
+        }
+        // A wide file's series may cover different spans (gaps elsewhere), so allow a span per column.
+        return perSeries * Math.max(1, first.cells().size() - 1);
+    }
+
+    private static IntakeException tooManyRows(CsvRow row, long cap, IntakeLimits limits) {
+        return new IntakeException(Reason.LIMIT_EXCEEDED, Where.line(row.line()), "the file holds more than " + cap
+                + " rows, more than its series can hold with the limit of " + limits.maxObservationsPerSeries()
+                + " observations per series; split the upload.");
     }
 
     private static void checkShape(List<CsvRow> rows, char delimiter) {

@@ -38,7 +38,9 @@ public enum Access {
             Map.entry("POST /api/series/{id}/briefs", EDIT), Map.entry("GET /api/briefs", READ),
             Map.entry("GET /api/briefs/misses", READ), Map.entry("DELETE /api/briefs/{id}", EDIT),
             Map.entry("GET /api/public/briefs/{token}", PUBLIC),
-            Map.entry("GET /api/audit", ADMIN_READ));
+            Map.entry("GET /api/audit", ADMIN_READ),
+            Map.entry("POST /api/jobs", EDIT), Map.entry("GET /api/jobs/{id}", READ),
+            Map.entry("GET /api/jobs/{id}/results", READ));
 
     /**
      * Checks that {@code principal} (null when anonymous) may call a route with this rule: 401

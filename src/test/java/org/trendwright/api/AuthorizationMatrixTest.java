@@ -52,7 +52,9 @@ class AuthorizationMatrixTest {
             Map.entry("DELETE /api/tokens/{id}", Rule.OWN_WRITE),
             Map.entry("GET /api/members", Rule.ADMIN_READ), Map.entry("POST /api/members", Rule.ADMIN_WRITE),
             Map.entry("PATCH /api/members/{id}", Rule.ADMIN_WRITE),
-            Map.entry("DELETE /api/members/{id}", Rule.ADMIN_WRITE), Map.entry("GET /api/audit", Rule.ADMIN_READ)));
+            Map.entry("DELETE /api/members/{id}", Rule.ADMIN_WRITE), Map.entry("GET /api/audit", Rule.ADMIN_READ),
+            Map.entry("POST /api/jobs", Rule.EDITOR), Map.entry("GET /api/jobs/{id}", Rule.MEMBER),
+            Map.entry("GET /api/jobs/{id}/results", Rule.MEMBER)));
 
     private RunningServer server;
     private final Map<Caller, Function<RequestSpecification, RequestSpecification>> callers = new TreeMap<>();
