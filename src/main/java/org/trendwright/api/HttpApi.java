@@ -71,10 +71,14 @@ public final class HttpApi {
                     routes.add(h.getHttpMethod().name() + " " + h.getPath());
                 }
             });
+            PageRoutes.configure(config);
             ProblemMapper.register(config.routes);
             config.routes.before(ctx -> services.storeReady().join());
             new SeriesRoutes(services.series(), uploads).register(config.routes);
             new FitRoutes(services.series(), fitService, uploads).register(config.routes);
+            new PreviewRoutes(uploads).register(config.routes);
+            new ComparisonRoutes(services.series(), uploads).register(config.routes);
+            PageRoutes.register(config.routes);
             new OperationsRoutes(services.databaseReachable(), services.registry()).register(config.routes);
         });
         return new Built(app, routes);
