@@ -2,7 +2,7 @@
 // the forecast table, the key checks in plain words, the author's note and the tracking of
 // actuals that arrived since publication. Every value is inserted as text.
 import { get } from './api.js';
-import { badge, byId, el, fill, num, say } from './dom.js';
+import { badge, byId, el, fill, num, say, verdict } from './dom.js';
 import { forecastChart } from './charts.js';
 
 function token() {
@@ -43,7 +43,7 @@ function forecastTable(rows, levels) {
 
 function checks(tests) {
   fill(byId('brief-checks'), tests.map((t) => el('li', {},
-    badge(t.decision === 'do-not-reject', 'Passes', 'Warning'), ' ', el('strong', {}, `${t.test}: `), t.reading)));
+    verdict(t), ' ', el('strong', {}, `${t.test}: `), t.reading)));
 }
 
 function tracking(track) {

@@ -65,3 +65,15 @@ export function download(blob, name) {
   link.remove();
   setTimeout(() => URL.revokeObjectURL(url), 1000);
 }
+
+/**
+ * The verdict of a test as a badge. For most checks (serial correlation, breaks) the null
+ * hypothesis is the good case, so a rejection is a warning; for a unit-root test the null is the
+ * troublesome case, so a rejection is fine.
+ */
+export function verdict(test) {
+  const rejected = test.decision === 'reject';
+  const nullIsTrouble = /dickey-fuller|unit root/i.test(`${test.test} ${test.nullHypothesis}`);
+  const what = `${rejected ? 'rejected' : 'not rejected'} at ${Math.round(test.level * 100)}%`;
+  return badge(rejected === nullIsTrouble, `Fine (${what})`, `Warning (${what})`);
+}

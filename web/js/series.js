@@ -1,7 +1,7 @@
 // The series view: model controls, the charts, diagnostics, coefficients, the forecast table
 // with its exports, the model comparison and publishing a brief. Results update in place.
 import { get, post } from './api.js';
-import { badge, byId, download, el, fill, num, pValue, say } from './dom.js';
+import { badge, byId, download, el, fill, num, pValue, say, verdict } from './dom.js';
 import { autocorrelationChart, forecastChart, png, residualChart } from './charts.js';
 import { publishBrief } from './publish.js';
 
@@ -75,7 +75,10 @@ function drawCharts() {
   const chart = current.fit.chart;
   forecastChart(byId('forecast-chart'), chart, byId('log-scale').checked);
   residualChart(byId('residual-chart'), chart);
-  autocorrelationChart(byId('acf-chart'), chart);
+  const none = chart.autocorrelations.length === 0;
+  byId('acf-empty').hidden = !none;
+  byId('acf-chart').parentElement.hidden = none;
+  if (!none) autocorrelationChart(byId('acf-chart'), chart);
 }
 
 function renderDiagnostics(answer) {
@@ -83,7 +86,7 @@ function renderDiagnostics(answer) {
     el('th', { scope: 'row' }, t.test),
     el('td', { class: 'num' }, num(t.statistic)),
     el('td', { class: 'num' }, pValue(t.pValue)),
-    el('td', {}, badge(t.decision === 'do-not-reject', 'Passes: no evidence against it', `Rejected at ${Math.round(t.level * 100)}%`)),
+    el('td', {}, verdict(t)),
     el('td', {}, t.reading))));
   fill(byId('fit-notes'), answer.notes.map((n) => el('li', {}, n)));
 }
