@@ -10,7 +10,7 @@ function token() {
   return parts[0] === 'b' && parts[1] ? decodeURIComponent(parts[1]) : new URLSearchParams(location.search).get('token');
 }
 
-const results = (brief) => brief.results || brief.fit || {};
+const results = (brief) => brief.results || {};
 const chartOf = (brief) => brief.chart || results(brief).chart;
 const levelName = (level) => `${Math.round(level * 100)}%`;
 
@@ -18,13 +18,13 @@ function header(brief) {
   const series = brief.series || results(brief).series || {};
   byId('brief-title').textContent = series.name ? `Forecast: ${series.name}` : 'Forecast brief';
   document.title = `${byId('brief-title').textContent} – Trendwright`;
-  const author = typeof brief.author === 'object' && brief.author ? brief.author.username : brief.author;
+  const { author } = brief;
   const published = brief.publishedAt ? new Date(brief.publishedAt).toLocaleString() : '';
   byId('brief-byline').textContent = [author ? `Published by ${author}` : 'Published', published ? `on ${published}` : '',
     series.version ? `(data version ${series.version})` : ''].filter(Boolean).join(' ');
-  if (brief.supersededBy) {
-    const newer = brief.supersededBy.url || (brief.supersededBy.token ? `/b/${brief.supersededBy.token}` : null);
-    if (newer && newer.startsWith('/')) byId('brief-newer').href = newer;
+  // supersededBy is the newer brief's link, and only when that brief is shared.
+  if (typeof brief.supersededBy === 'string' && brief.supersededBy.startsWith('/b/')) {
+    byId('brief-newer').href = brief.supersededBy;
     byId('brief-superseded').hidden = false;
   }
   byId('note-section').hidden = !brief.note;
@@ -48,20 +48,24 @@ function checks(tests) {
 
 function tracking(track) {
   const section = byId('tracking-section');
-  const rows = track?.rows || track?.points || [];
+  const rows = track?.periods || [];
   if (!track || rows.length === 0) {
     byId('tracking-summary').textContent = 'No actuals have arrived for the forecast periods yet.';
     fill(byId('brief-tracking').tBodies[0]);
     section.hidden = false;
     return;
   }
-  const mape = track.mape ?? track.runningMape;
-  const mae = track.mae ?? track.runningMae;
+  const { mae, mape } = track;
   byId('tracking-summary').textContent = `${rows.length} actual(s) so far. Mean absolute error ${num(mae)}`
     + (mape == null ? '.' : `, mean absolute percentage error ${num(mape, 3)}%.`);
   fill(byId('brief-tracking').tBodies[0], rows.map((r) => el('tr', {}, el('th', { scope: 'row' }, r.period),
     el('td', { class: 'num' }, num(r.forecast, 5)), el('td', { class: 'num' }, num(r.actual, 5)),
-    el('td', {}, badge(r.inside80 !== false, 'Yes', 'No')), el('td', {}, badge(r.inside95 !== false, 'Yes', 'No')))));
+    el('td', {}, inside(r.inside80)), el('td', {}, inside(r.inside95)))));
+}
+
+/** Whether an actual fell inside an interval; null when the brief has no interval at that level. */
+function inside(flag) {
+  return flag === null || flag === undefined ? '—' : badge(flag, 'Inside', 'Outside');
 }
 
 /** Redraws the chart at the printed width, and back after printing. */

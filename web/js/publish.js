@@ -7,7 +7,8 @@ export async function publishBrief(current, request) {
   const { detail } = current;
   try {
     const brief = await post(`/api/series/${detail.id}/briefs`, {
-      version: detail.version, model: request.model, note: byId('brief-note').value,
+      version: detail.version, model: request.model, horizon: request.horizon, levels: request.levels,
+      note: byId('brief-note').value,
     });
     const link = new URL(brief.url, location.origin).href;
     byId('brief-link').value = link;

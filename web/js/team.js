@@ -15,7 +15,7 @@ export async function showMembers() {
   if (!teamAvailable()) { unavailable(message); fill(byId('members-table').tBodies[0]); return; }
   try {
     const answer = await get('/api/members');
-    const list = Array.isArray(answer) ? answer : answer.members;
+    const list = answer.items;
     fill(byId('members-table').tBodies[0], list.map(memberRow));
   } catch (error) {
     say(message, error instanceof ApiError && error.status === 403 ? 'Only an admin can manage members.' : error.message, 'error');
@@ -59,7 +59,7 @@ export async function showTokens() {
   if (!teamAvailable()) { unavailable(message); fill(byId('tokens-table').tBodies[0]); return; }
   try {
     const answer = await get('/api/tokens');
-    const list = Array.isArray(answer) ? answer : answer.tokens;
+    const list = answer.items.filter((t) => !t.revokedAt);
     fill(byId('tokens-table').tBodies[0], list.map(tokenRow));
   } catch (error) {
     say(message, error.message, 'error');

@@ -12,12 +12,19 @@ import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.function.BooleanSupplier;
 import org.eclipse.jetty.server.handler.GracefulHandler;
 import org.trendwright.series.IntakeLimits;
+import java.time.Clock;
+import org.trendwright.store.AuditRepository;
+import org.trendwright.store.BriefRepository;
 import org.trendwright.store.FitResultRepository;
+import org.trendwright.store.MemberRepository;
+import org.trendwright.store.TokenRepository;
+import org.trendwright.team.SetupCode;
+import org.trendwright.team.TeamSettings;
 import org.trendwright.store.SeriesRepository;
 
 /**
  * Builds the Javalin application: routes, the one error mapper, the JSON mapper, request logging
- * and metrics, the body size limit, a gate that holds requests until the store is ready, and a
+ * and metrics, the body size limit, the access gate of the team features (see {@link AuthGate}), a gate that holds requests until the store is ready, and a
  * graceful stop that lets requests in flight finish (up to {@code stopTimeout}) before the server
  * closes.
  */
@@ -42,6 +49,14 @@ public final class HttpApi {
                            long maxBodyBytes, Duration stopTimeout, CompletableFuture<?> storeReady) {
     }
 
+    /**
+     * What the team features need: members and sessions, API tokens, briefs, the audit log,
+     * sign-in settings, the one-time setup code and the clock.
+     */
+    public record Team(MemberRepository members, TokenRepository tokens, BriefRepository briefs,
+                       AuditRepository audit, TeamSettings settings, SetupCode setupCode, Clock clock) {
+    }
+
     /** A built, not yet started application and the routes it registered ("GET /api/series"). */
     public record Built(Javalin app, List<String> routes) {
     }
@@ -49,7 +64,7 @@ public final class HttpApi {
     private HttpApi() {
     }
 
-    public static Built create(Services services) {
+    public static Built create(Services services, Team team) {
         List<String> routes = new CopyOnWriteArrayList<>();
         Uploads uploads = new Uploads(services.mapper(), services.limits());
         FitService fitService = new FitService(services.fits(), services.mapper(), services.registry());
@@ -74,8 +89,12 @@ public final class HttpApi {
             PageRoutes.configure(config);
             ProblemMapper.register(config.routes);
             config.routes.before(ctx -> services.storeReady().join());
+            new AuthGate(team.members(), team.tokens(), team.audit(), team.settings()).register(config.routes);
             new SeriesRoutes(services.series(), uploads).register(config.routes);
             new FitRoutes(services.series(), fitService, uploads).register(config.routes);
+            new TeamRoutes(team, uploads).register(config.routes);
+            new BriefRoutes(services.series(), team.briefs(), fitService, uploads, services.mapper(), team.clock())
+                    .register(config.routes);
             new PreviewRoutes(uploads).register(config.routes);
             new ComparisonRoutes(services.series(), uploads).register(config.routes);
             PageRoutes.register(config.routes);

@@ -12,15 +12,11 @@ import java.util.Map;
 /**
  * The browser page: the files of web/ (packed into the jar under /web) served from the classpath
  * at /, Chart.js from its webjar under /webjars/, and two HTML entry points with paths of their
- * own: /setup (first start) and /b/{token} (a published brief, no sign-in). Every page is sent
- * with a Content-Security-Policy that allows scripts, styles and images from this server only.
- * Thread-safe.
+ * own: /setup (first start) and /b/{token} (a published brief, no sign-in). The
+ * Content-Security-Policy and the other security headers of every answer are set by
+ * {@link AuthGate#securityHeaders}. Thread-safe.
  */
 final class PageRoutes {
-
-    /** No inline script, style or handler runs; charts export to data: and blob: images. */
-    static final String CONTENT_SECURITY_POLICY = "default-src 'self'; script-src 'self'; style-src 'self';"
-            + " img-src 'self' data: blob:";
 
     private PageRoutes() {
     }
@@ -30,8 +26,7 @@ final class PageRoutes {
             files.hostedPath = "/";
             files.directory = "/web";
             files.location = Location.CLASSPATH;
-            files.headers = Map.of("Content-Security-Policy", CONTENT_SECURITY_POLICY,
-                    "X-Content-Type-Options", "nosniff", "Cache-Control", "no-cache");
+            files.headers = Map.of("Cache-Control", "no-cache");
         });
         config.staticFiles.enableWebjars();
     }
@@ -46,8 +41,7 @@ final class PageRoutes {
             if (in == null) {
                 throw new IllegalStateException("The page /web/" + file + " is missing from the classpath");
             }
-            ctx.header("Content-Security-Policy", CONTENT_SECURITY_POLICY).header("Cache-Control", "no-cache")
-                    .contentType("text/html; charset=utf-8").result(in.readAllBytes());
+            ctx.header("Cache-Control", "no-cache").contentType("text/html; charset=utf-8").result(in.readAllBytes());
         } catch (IOException e) {
             throw new UncheckedIOException("The page /web/" + file + " could not be read", e);
         }

@@ -15,6 +15,7 @@ import org.trendwright.core.RankDeficientDesignException;
 import org.trendwright.series.IntakeException;
 import org.trendwright.series.SeriesNotFoundException;
 import org.trendwright.series.VersionConflictException;
+import org.trendwright.team.TeamException;
 
 /**
  * The one place where exceptions become HTTP answers, all as RFC 9457 problem+json:
@@ -25,6 +26,7 @@ import org.trendwright.series.VersionConflictException;
  *   <tr><td>ModelException (the core's)</td><td>422 with the core's message</td></tr>
  *   <tr><td>SeriesNotFoundException</td><td>404</td></tr>
  *   <tr><td>VersionConflictException</td><td>412 (stale If-Match)</td></tr>
+ *   <tr><td>TeamException</td><td>its status: 401, 403, 404, 409 (last admin), 429 (sign-in lock-out)</td></tr>
  *   <tr><td>Javalin's HttpResponseException</td><td>its status (404 no route, 405, 413 body too large)</td></tr>
  *   <tr><td>anything else</td><td>500 with an error id; logged with the stack trace under that id</td></tr>
  * </table>
@@ -50,6 +52,12 @@ public final class ProblemMapper {
                 send(ctx, 404, "not-found", e.getMessage(), null, null, null));
         routes.exception(VersionConflictException.class, (e, ctx) ->
                 send(ctx, 412, "stale-version", e.getMessage(), null, null, "If-Match"));
+        routes.exception(TeamException.class, (e, ctx) -> {
+            if (e.status() == 401) {
+                ctx.header("WWW-Authenticate", "Bearer");
+            }
+            send(ctx, e.status(), e.type(), e.getMessage(), null, null, null);
+        });
         routes.exception(HttpResponseException.class, (e, ctx) ->
                 send(ctx, e.getStatus(), slug(HttpStatus.forStatus(e.getStatus()).getMessage()),
                         httpDetail(e, ctx), null, null, null));

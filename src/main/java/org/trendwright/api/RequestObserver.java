@@ -31,13 +31,16 @@ final class RequestObserver {
                 .tags("method", ctx.method().name(), "route", route, "status", Integer.toString(status))
                 .publishPercentileHistogram().register(registry)
                 .record((long) (millis * 1_000_000L), TimeUnit.NANOSECONDS);
-        LOG.info("method={} path={} route={} status={} ms={}", ctx.method().name(), ctx.path(), route, status,
+        // A path that carries a secret (a brief link's token) is logged as its route template.
+        String path = route.contains("{token}") ? route : ctx.path();
+        LOG.info("method={} path={} route={} status={} ms={}", ctx.method().name(), path, route, status,
                 String.format(java.util.Locale.ROOT, "%.2f", millis));
     }
 
     private static String route(Context ctx) {
         try {
-            String path = ctx.endpoint().path;
+            io.javalin.router.Endpoint matched = ctx.endpoints().matchedHttpEndpoint();
+            String path = matched == null ? null : matched.path;
             return path == null || path.isEmpty() || path.equals("*") ? "unmatched" : path;
         } catch (RuntimeException e) {
             return "unmatched";

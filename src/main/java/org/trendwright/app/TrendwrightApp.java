@@ -18,7 +18,13 @@ import org.trendwright.api.HttpApi;
 import org.trendwright.api.JsonMapping;
 import org.trendwright.series.IntakeLimits;
 import org.trendwright.store.Database;
+import org.trendwright.store.AuditRepository;
+import org.trendwright.store.BriefRepository;
 import org.trendwright.store.FitResultRepository;
+import org.trendwright.store.MemberRepository;
+import org.trendwright.store.TokenRepository;
+import org.trendwright.team.SetupCode;
+import org.trendwright.team.TeamSettings;
 import org.trendwright.store.SeriesRepository;
 
 /**
@@ -35,12 +41,17 @@ public final class TrendwrightApp implements AutoCloseable {
     private final List<String> routes;
     private final Database database;
     private final boolean ownsDatabase;
+    private final HttpApi.Team team;
+    private final String host;
 
-    private TrendwrightApp(Javalin server, List<String> routes, Database database, boolean ownsDatabase) {
+    private TrendwrightApp(Javalin server, List<String> routes, Database database, boolean ownsDatabase,
+                           HttpApi.Team team, String host) {
         this.server = server;
         this.routes = routes;
         this.database = database;
         this.ownsDatabase = ownsDatabase;
+        this.team = team;
+        this.host = host;
     }
 
     /**
@@ -49,6 +60,11 @@ public final class TrendwrightApp implements AutoCloseable {
      * returns once both are done.
      */
     public static TrendwrightApp start(Settings settings, Clock clock) {
+        return start(settings, TeamSettings.from(System.getenv()), clock);
+    }
+
+    /** As {@link #start(Settings, Clock)} with the given sign-in settings. */
+    public static TrendwrightApp start(Settings settings, TeamSettings team, Clock clock) {
         if (settings.usesEmbeddedStore()) {
             createDirectory(settings);
         }
@@ -59,9 +75,9 @@ public final class TrendwrightApp implements AutoCloseable {
                 database.migrate();
                 seed(settings, new SeriesRepository(database, clock));
             });
-            app = start(settings, database, clock, true, ready);
+            app = start(settings, team, database, clock, true, ready);
             ready.join();
-            return app;
+            return app.announceSetup();
         } catch (RuntimeException e) {
             if (app != null) {
                 app.close();
@@ -74,8 +90,13 @@ public final class TrendwrightApp implements AutoCloseable {
 
     /** Starts on a store opened and migrated by the caller, who keeps closing it. */
     public static TrendwrightApp start(Settings settings, Database database, Clock clock) {
+        return start(settings, TeamSettings.defaults(), database, clock);
+    }
+
+    /** As {@link #start(Settings, Database, Clock)} with the given sign-in settings. */
+    public static TrendwrightApp start(Settings settings, TeamSettings team, Database database, Clock clock) {
         seed(settings, new SeriesRepository(database, clock));
-        return start(settings, database, clock, false, CompletableFuture.completedFuture(null));
+        return start(settings, team, database, clock, false, CompletableFuture.completedFuture(null)).announceSetup();
     }
 
     private static void seed(Settings settings, SeriesRepository series) {
@@ -88,21 +109,42 @@ public final class TrendwrightApp implements AutoCloseable {
         return new IntakeLimits(settings.maxObservationsPerSeries(), settings.maxSeriesPerUpload());
     }
 
-    private static TrendwrightApp start(Settings settings, Database database, Clock clock, boolean owns,
-                                        CompletableFuture<?> ready) {
+    private static TrendwrightApp start(Settings settings, TeamSettings teamSettings, Database database, Clock clock,
+                                        boolean owns, CompletableFuture<?> ready) {
         SeriesRepository series = new SeriesRepository(database, clock);
+        HttpApi.Team team = team(database, clock, teamSettings);
         IntakeLimits limits = limits(settings);
         PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
         new JvmMemoryMetrics().bindTo(registry);
         new UptimeMetrics().bindTo(registry);
         HttpApi.Built built = HttpApi.create(new HttpApi.Services(series, new FitResultRepository(database, clock),
                 database::isReachable, registry, JsonMapping.create(), limits, settings.maxBodyBytes(),
-                settings.shutdownGrace(), ready));
+                settings.shutdownGrace(), ready), team);
         built.app().start(settings.host(), settings.port());
         LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={}", settings.host(), built.app().port(),
                 database.dialect().name().toLowerCase(java.util.Locale.ROOT),
                 java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
-        return new TrendwrightApp(built.app(), built.routes(), database, owns);
+        return new TrendwrightApp(built.app(), built.routes(), database, owns, team, settings.host());
+    }
+
+    /**
+     * The team features' parts.
+     */
+    private static HttpApi.Team team(Database database, Clock clock, TeamSettings settings) {
+        return new HttpApi.Team(new MemberRepository(database, clock), new TokenRepository(database, clock),
+                new BriefRepository(database, clock), new AuditRepository(database, clock), settings,
+                SetupCode.of(settings.setupCode()), clock);
+    }
+
+    /**
+     * Prints, on the console only (never the log), how to create the first admin: the sign-in
+     * address and the setup code, while no member exists.
+     */
+    private TrendwrightApp announceSetup() {
+        if (team.members().isEmpty()) {
+            System.out.println(team.setupCode().announcement("http://" + host + ":" + server.port()));
+        }
+        return this;
     }
 
     private static void createDirectory(Settings settings) {

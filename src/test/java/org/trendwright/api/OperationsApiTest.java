@@ -29,6 +29,7 @@ import org.trendwright.app.TrendwrightApp;
 import org.trendwright.store.Database;
 import org.trendwright.testing.FreshStore;
 import org.trendwright.testing.RunningServer;
+import org.trendwright.testing.TeamAccess;
 
 /**
  * The operational surface: the OpenAPI document against the registered routes, health, metrics
@@ -106,12 +107,14 @@ class OperationsApiTest {
         settings = new Settings(settings.host(), 0, settings.dataDirectory(), null, null, 4, settings.maxBodyBytes(),
                 settings.maxObservationsPerSeries(), settings.maxSeriesPerUpload(), false, Duration.ofSeconds(5));
         try (FreshStore store = FreshStore.create(FreshStore.Kind.SQLITE); Database database = store.open()) {
-            TrendwrightApp app = TrendwrightApp.start(settings, database, Clock.systemUTC());
+            TrendwrightApp app = TrendwrightApp.start(settings, TeamAccess.testSettings(), database, Clock.systemUTC());
             int port = app.port();
+            String token = TeamAccess.bootstrap(port);
             byte[] body = "period,value\n2024-Q1,1\n2024-Q2,2\n".getBytes(StandardCharsets.UTF_8);
             try (Socket socket = new Socket("127.0.0.1", port)) {
                 OutputStream out = socket.getOutputStream();
                 out.write(("POST /api/series?name=late HTTP/1.1\r\nHost: localhost\r\nContent-Type: text/csv\r\n"
+                        + "Authorization: Bearer " + token + "\r\n"
                         + "Content-Length: " + body.length + "\r\nConnection: close\r\n\r\n")
                         .getBytes(StandardCharsets.US_ASCII));
                 out.write(body, 0, 10);

@@ -1,8 +1,8 @@
 package org.trendwright.api;
 
 import static org.hamcrest.Matchers.containsString;
-import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.hasSize;
+import static org.hamcrest.Matchers.startsWith;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -24,6 +24,10 @@ import org.trendwright.testing.RunningServer;
  * and Chart.js from the jar. These do not depend on the kind of store, so they run on SQLite.
  */
 class PageSupportApiTest {
+
+    /** The policy the page is written for: no inline script, style or event handler runs. */
+    private static final String POLICY = "default-src 'self'; script-src 'self'; style-src 'self'; img-src 'self'"
+            + " data: blob:";
 
     private RunningServer server;
 
@@ -96,15 +100,23 @@ class PageSupportApiTest {
     }
 
     @Test
-    void serves_the_page_with_a_content_security_policy_and_chart_js_from_the_jar() {
-        server.given().get("/").then().statusCode(200).contentType(containsString("text/html"))
-                .header("Content-Security-Policy", equalTo(PageRoutes.CONTENT_SECURITY_POLICY));
-        server.given().get("/b/some-token").then().statusCode(200)
-                .header("Content-Security-Policy", equalTo(PageRoutes.CONTENT_SECURITY_POLICY))
-                .body(containsString("brief.js"));
-        server.given().get("/setup").then().statusCode(200).body(containsString("setup"));
-        server.given().get("/webjars/chart.js/4.5.1/dist/chart.umd.js").then().statusCode(200)
+    void serves_the_page_without_sign_in_under_a_policy_that_forbids_inline_code_and_chart_js_from_the_jar() {
+        server.anonymous().get("/").then().statusCode(200).contentType(containsString("text/html"))
+                .header("Content-Security-Policy", startsWith(POLICY));
+        server.anonymous().get("/js/app.js").then().statusCode(200).header("Content-Security-Policy", startsWith(POLICY));
+        server.anonymous().get("/b/some-token").then().statusCode(200)
+                .header("Content-Security-Policy", startsWith(POLICY)).body(containsString("brief.js"));
+        server.anonymous().get("/setup").then().statusCode(200).body(containsString("setup.js"));
+        server.anonymous().get("/webjars/chart.js/4.5.1/dist/chart.umd.js").then().statusCode(200)
                 .body(containsString("Chart"));
+    }
+
+    @Test
+    void asks_for_sign_in_before_a_preview_or_a_comparison() {
+        server.anonymous().contentType("text/csv").body("year,v\n2001,1\n").post("/api/series/preview").then()
+                .statusCode(401);
+        server.anonymous().contentType("application/json").body("{}").post("/api/series/1/versions/1/comparison")
+                .then().statusCode(401);
     }
 
     private static double rollingRmse(Map<String, Object> row) {

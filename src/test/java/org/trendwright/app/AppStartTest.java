@@ -15,6 +15,7 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.trendwright.testing.TeamAccess;
 
 /**
  * The server as Main starts it: its own SQLite file created in the data directory on first start,
@@ -23,6 +24,7 @@ import org.junit.jupiter.api.Test;
 class AppStartTest {
 
     private Path dataDirectory;
+    private String token;
 
     @BeforeEach
     void createFolder() throws IOException {
@@ -41,14 +43,18 @@ class AppStartTest {
     private TrendwrightApp start(boolean demo) {
         Settings settings = new Settings("127.0.0.1", 0, dataDirectory, null, null, 2, 1 << 20, 1000, 10, demo,
                 Duration.ZERO);
-        return TrendwrightApp.start(settings, Clock.systemUTC());
+        TrendwrightApp app = TrendwrightApp.start(settings, TeamAccess.testSettings(), Clock.systemUTC());
+        if (token == null) {
+            token = TeamAccess.bootstrap(app.port());
+        }
+        return app;
     }
 
     @Test
     void loads_the_demo_series_into_an_empty_store_once() {
         for (int run = 0; run < 2; run++) {
             try (TrendwrightApp app = start(true)) {
-                RestAssured.given().port(app.port()).get("/api/series").then().statusCode(200)
+                RestAssured.given().port(app.port()).auth().oauth2(token).get("/api/series").then().statusCode(200)
                         .body("series", hasSize(6))
                         .body("series.name", equalTo(List.of("Kettles", "Garden furniture", "Enamel mugs",
                                 "Smart plugs", "Water filters", "Tea towels")))
@@ -61,7 +67,7 @@ class AppStartTest {
     @Test
     void starts_empty_when_demo_data_is_turned_off() {
         try (TrendwrightApp app = start(false)) {
-            RestAssured.given().port(app.port()).get("/api/series").then().body("series", hasSize(0));
+            RestAssured.given().port(app.port()).auth().oauth2(token).get("/api/series").then().body("series", hasSize(0));
         }
     }
 }

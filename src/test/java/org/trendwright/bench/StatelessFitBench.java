@@ -55,10 +55,11 @@ public class StatelessFitBench {
         folder = Files.createTempDirectory("trendwright-bench-");
         Settings settings = Settings.from(new String[] {"--port=0", "--demo-data=false",
             "--data-dir=" + folder}, java.util.Map.of());
-        app = TrendwrightApp.start(settings, Clock.systemUTC());
+        app = TrendwrightApp.start(settings, org.trendwright.testing.TeamAccess.testSettings(), Clock.systemUTC());
+        String token = org.trendwright.testing.TeamAccess.bootstrap(app.port());
         client = HttpClient.newBuilder().version(HttpClient.Version.HTTP_1_1).build();
         request = HttpRequest.newBuilder(URI.create("http://127.0.0.1:" + app.port() + "/api/fit"))
-                .header("Content-Type", "application/json").timeout(Duration.ofSeconds(10))
+                .header("Content-Type", "application/json").header("Authorization", "Bearer " + token).timeout(Duration.ofSeconds(10))
                 .POST(HttpRequest.BodyPublishers.ofString(body())).build();
     }
 

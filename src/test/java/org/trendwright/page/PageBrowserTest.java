@@ -22,6 +22,7 @@ import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
 import org.trendwright.testing.FreshStore;
 import org.trendwright.testing.RunningServer;
+import org.trendwright.testing.TeamAccess;
 
 /**
  * The page end to end in a real headless Chromium against a really started server: upload with
@@ -40,6 +41,19 @@ class PageBrowserTest {
                 + " install it with: apt-get update && apt-get install -y chromium chromium-driver");
         server = RunningServer.start(FreshStore.Kind.SQLITE);
         browser = Browser.open(1280, 800);
+        signIn();
+    }
+
+    /** Signs the browser in as the test server's first admin through the sign-in screen. */
+    private static void signIn() {
+        browser.driver.get(base() + "/");
+        browser.awaitReady();
+        browser.await(ExpectedConditions.visibilityOfElementLocated(By.id("signin-form")));
+        browser.screenshot("sign-in");
+        browser.find("#signin-username").sendKeys(TeamAccess.ADMIN);
+        browser.find("#signin-password").sendKeys(TeamAccess.ADMIN_PASSWORD);
+        browser.find("#signin-form button[type=submit]").click();
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("session-user"), TeamAccess.ADMIN));
     }
 
     @AfterAll
@@ -128,6 +142,49 @@ class PageBrowserTest {
         browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("preview-summary"), name));
         assertTrue(browser.driver.findElements(By.cssSelector("#main img")).isEmpty(), "markup from data became an element");
         assertNull(browser.js("return window.__pwned"));
+    }
+
+    @Test
+    void publishes_a_brief_that_a_fresh_anonymous_browser_opens_prints_and_tracks() {
+        String created = server.given().contentType("text/csv").body(quarterlySales().replace("store_sales", "brief_sales"))
+                .post("/api/series").then().statusCode(201).extract().path("series[0].id").toString();
+        long id = (long) Double.parseDouble(created);
+        browser.driver.manage().window().setSize(new Dimension(1280, 800));
+        visit("#/series/" + id);
+        browser.await(ExpectedConditions.attributeContains(By.id("results"), "data-fitted", "trend"));
+        String note = "Plan on the 80% band. <b onmouseover=window.__pwned=1>bold?</b>";
+        browser.find("#brief-note").sendKeys(note);
+        browser.find("#publish-button").click();
+        browser.await(ExpectedConditions.visibilityOfElementLocated(By.id("brief-link-row")));
+        String link = browser.find("#brief-link").getAttribute("value");
+        assertTrue(link.startsWith(base() + "/b/"), link);
+
+        // Actuals for the first two forecast periods arrive after publication.
+        String etag = server.given().get("/api/series/" + id).then().extract().header("ETag");
+        server.given().contentType("text/csv").header("If-Match", etag)
+                .body("period,brief_sales\n2025-Q1,151.5\n2025-Q2,400\n").post("/api/series/" + id + "/versions")
+                .then().statusCode(201);
+
+        try (Browser reader = Browser.open(1280, 800)) {
+            reader.driver.get(link);
+            reader.awaitReady();
+            assertEquals("Forecast: brief_sales", reader.find("#brief-title").getText());
+            assertEquals(note, reader.find("#brief-note-text").getText());
+            assertTrue(reader.inkedPixels("brief-chart") > 2000, "the brief's chart drew nothing");
+            assertEquals(8, reader.driver.findElements(By.cssSelector("#brief-forecast tbody tr")).size());
+            assertFalse(reader.driver.findElements(By.cssSelector("#brief-checks li")).isEmpty());
+            List<WebElement> tracked = reader.driver.findElements(By.cssSelector("#brief-tracking tbody tr"));
+            assertEquals(2, tracked.size());
+            // 400 lies far above any interval of a series near 150.
+            assertTrue(tracked.get(1).getText().contains("Outside"), tracked.get(1).getText());
+            assertNull(reader.js("return window.__pwned"));
+            assertTrue(reader.driver.findElements(By.cssSelector("#brief b")).isEmpty(), "the note became markup");
+            reader.fullScreenshot("brief", 1280);
+            reader.driver.executeCdpCommand("Emulation.setEmulatedMedia", java.util.Map.of("media", "print"));
+            reader.driver.manage().window().setSize(new Dimension(794, 1123));
+            reader.screenshot("brief-print-a4");
+            assertFalse(reader.find("#print-button").isDisplayed(), "the print button is printed");
+        }
     }
 
     /**

@@ -14,7 +14,7 @@ import org.trendwright.store.Database;
 
 /**
  * A really started Trendwright on a random port (port 0) over a {@link FreshStore}, for REST
- * Assured tests. {@link #restart()} stops the server and its pool and starts a new one on the same
+ * Assured tests, with its first admin created (see {@link TeamAccess}). {@link #restart()} stops the server and its pool and starts a new one on the same
  * data, as a process restart would. {@link #close()} stops it and removes the store.
  */
 public final class RunningServer implements AutoCloseable {
@@ -23,6 +23,7 @@ public final class RunningServer implements AutoCloseable {
     private final Settings settings;
     private Database database;
     private TrendwrightApp app;
+    private String adminToken;
 
     private RunningServer(FreshStore store, Settings settings) {
         this.store = store;
@@ -47,7 +48,10 @@ public final class RunningServer implements AutoCloseable {
 
     private void start() {
         database = store.open();
-        app = TrendwrightApp.start(settings, database, Clock.systemUTC());
+        app = TrendwrightApp.start(settings, TeamAccess.testSettings(), database, Clock.systemUTC());
+        if (adminToken == null) {
+            adminToken = TeamAccess.bootstrap(app.port());
+        }
     }
 
     /** Stops the server and closes its pool, then starts both again on the same store. */
@@ -56,10 +60,23 @@ public final class RunningServer implements AutoCloseable {
         start();
     }
 
-    /** A REST Assured request aimed at this server; JSON numbers are read as doubles. */
+    /**
+     * A REST Assured request aimed at this server as its first admin (with a read-write API
+     * token); JSON numbers are read as doubles.
+     */
     public RequestSpecification given() {
+        return anonymous().header("Authorization", "Bearer " + adminToken);
+    }
+
+    /** A request aimed at this server that is not signed in. */
+    public RequestSpecification anonymous() {
         return RestAssured.given().baseUri("http://127.0.0.1").port(app.port())
                 .config(RestAssured.config().jsonConfig(JsonConfig.jsonConfig().numberReturnType(NumberReturnType.DOUBLE)));
+    }
+
+    /** The first admin's read-write API token. */
+    public String adminToken() {
+        return adminToken;
     }
 
     public int port() {
