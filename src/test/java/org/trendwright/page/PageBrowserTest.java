@@ -88,6 +88,8 @@ class PageBrowserTest {
         List<WebElement> marked = browser.driver.findElements(By.cssSelector("#preview-table tr.problem"));
         assertEquals("4", marked.get(0).findElement(By.tagName("th")).getText());
         assertFalse(browser.find("#upload-save").isEnabled());
+        browser.fullScreenshot("upload-preview-problems", 1280);
+        browser.driver.manage().window().setSize(new Dimension(1280, 800));
 
         browser.find("#upload-cancel").click();
         browser.find("#file-input").sendKeys(csvFile(quarterlySales()).toString());
@@ -111,7 +113,13 @@ class PageBrowserTest {
         browser.await(ExpectedConditions.attributeContains(By.id("results"), "data-fitted", "autoregression"));
         assertTrue(browser.inkedPixels("forecast-chart") > 2000, "the forecast chart of the new model drew nothing");
         assertEquals("ready", labelsAndPolicy());
+        Object pngBytes = browser.driver.executeAsyncScript("const done = arguments[arguments.length - 1];"
+                + "import('/js/charts.js').then(m => m.png(document.getElementById('forecast-chart')))"
+                + ".then(b => done(b.type + ' ' + b.size));");
+        assertTrue(String.valueOf(pngBytes).startsWith("image/png "), String.valueOf(pngBytes));
         browser.fullScreenshot("series-view", 1280);
+        browser.driver.manage().window().setSize(new Dimension(768, 1024));
+        browser.screenshot("series-view-tablet");
 
         browser.driver.manage().window().setSize(new Dimension(768, 1024));
         visit("#/");
@@ -185,6 +193,31 @@ class PageBrowserTest {
             reader.screenshot("brief-print-a4");
             assertFalse(reader.find("#print-button").isDisplayed(), "the print button is printed");
         }
+    }
+
+    @Test
+    void adds_a_member_and_makes_a_token_that_is_shown_once() {
+        browser.driver.manage().window().setSize(new Dimension(1280, 800));
+        visit("#/members");
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("members-table"), TeamAccess.ADMIN));
+        browser.find("#member-username").sendKeys("planner");
+        browser.find("#member-password").sendKeys("planner-password-1");
+        new Select(browser.find("#member-role")).selectByValue("editor");
+        browser.find("#member-form button[type=submit]").click();
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("members-table"), "planner"));
+        assertEquals("editor", server.given().get("/api/members").then().extract().jsonPath()
+                .getString("items.find { it.username == 'planner' }.role"));
+        browser.screenshot("members");
+
+        visit("#/tokens");
+        browser.find("#token-name").sendKeys("nightly export");
+        browser.find("#token-form button[type=submit]").click();
+        browser.await(ExpectedConditions.visibilityOfElementLocated(By.id("new-token-row")));
+        String token = browser.find("#new-token").getAttribute("value");
+        server.anonymous().header("Authorization", "Bearer " + token).get("/api/series").then().statusCode(200);
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("tokens-table"), "nightly export"));
+        visit("#/tokens");
+        assertFalse(browser.find("#new-token-row").isDisplayed(), "the token is shown a second time");
     }
 
     /**
