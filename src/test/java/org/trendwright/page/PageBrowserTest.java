@@ -10,6 +10,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Clock;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.AfterAll;
@@ -20,6 +21,8 @@ import org.openqa.selenium.Dimension;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
+import org.trendwright.app.TrendwrightApp;
+import org.trendwright.store.Database;
 import org.trendwright.testing.FreshStore;
 import org.trendwright.testing.RunningServer;
 import org.trendwright.testing.TeamAccess;
@@ -218,6 +221,23 @@ class PageBrowserTest {
         browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("tokens-table"), "nightly export"));
         visit("#/tokens");
         assertFalse(browser.find("#new-token-row").isDisplayed(), "the token is shown a second time");
+    }
+
+    @Test
+    void creates_the_first_admin_on_the_setup_screen_of_a_new_server() {
+        try (FreshStore store = FreshStore.create(FreshStore.Kind.SQLITE); Database database = store.open();
+             TrendwrightApp fresh = TrendwrightApp.start(RunningServer.testSettings(), TeamAccess.testSettings(),
+                     database, Clock.systemUTC());
+             Browser newcomer = Browser.open(1280, 800)) {
+            newcomer.driver.get("http://127.0.0.1:" + fresh.port() + "/setup");
+            newcomer.find("#setup-code").sendKeys(TeamAccess.SETUP_CODE);
+            newcomer.find("#setup-username").sendKeys("first-admin");
+            newcomer.find("#setup-password").sendKeys("first-password-1");
+            newcomer.find("#setup-password-again").sendKeys("first-password-1");
+            newcomer.screenshot("setup");
+            newcomer.find("#setup-form button[type=submit]").click();
+            newcomer.await(ExpectedConditions.textToBePresentInElementLocated(By.id("session-user"), "first-admin (admin)"));
+        }
     }
 
     /**
