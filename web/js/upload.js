@@ -44,7 +44,9 @@ async function preview(text, source) {
 }
 
 function showPreview(text, delimiter, answer) {
-  fill(byId('preview-summary'), answer.series.length === 0 ? null : el('ul', { class: 'notes' },
+  const caveat = answer.acceptable || answer.series.length === 0 ? null
+    : el('p', {}, 'What the rest of the data reads as, leaving out the marked lines:');
+  fill(byId('preview-summary'), caveat, answer.series.length === 0 ? null : el('ul', { class: 'notes' },
     answer.series.map((s) => el('li', {}, el('strong', {}, s.name), `: ${s.frequency} (${s.periodsPerYear} per year), `,
       `${s.observationCount} observations, ${s.observations[0]?.period ?? ''} to ${s.observations.at(-1)?.period ?? ''}`))));
   const byLine = new Map();
