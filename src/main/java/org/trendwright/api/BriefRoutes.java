@@ -132,6 +132,8 @@ final class BriefRoutes {
         try {
             ObjectNode fit = (ObjectNode) mapper.readTree(results);
             JsonNode chart = fit.remove("chart");
+            // The page shows the series by name; its id in this store is nobody's business outside.
+            ((ObjectNode) fit.path("series")).remove("id");
             ObjectNode root = mapper.createObjectNode();
             ObjectNode data = root.putObject("series");
             data.put("name", version.name()).put("version", version.version())

@@ -11,8 +11,10 @@ import java.util.concurrent.CompletionException;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.Supplier;
 import org.trendwright.core.ModelException;
+import org.trendwright.core.NonPositiveValueException;
 import org.trendwright.core.Observations;
 import org.trendwright.series.Frequency;
+import org.trendwright.series.Period;
 import org.trendwright.series.Point;
 import org.trendwright.series.SeriesVersion;
 import org.trendwright.series.SeriesVersions;
@@ -96,12 +98,23 @@ final class FitService {
                                    FitRequest request) {
         Observations series = SeriesVersions.observations(frequency, points);
         if (request.model() instanceof TrendModel trend) {
-            return TrendResponses.fit(ref, points.get(0).period(), series, trend, request);
+            try {
+                return TrendResponses.fit(ref, points.get(0).period(), series, trend, request);
+            } catch (NonPositiveValueException e) {
+                throw namingThePeriod(e, points.get(0).period());
+            }
         }
         if (request.model() instanceof ArModel ar) {
             return ArResponses.fit(ref, points.get(0).period(), series, ar, request);
         }
         throw new IllegalStateException("No fitter for model family " + request.model().family());
+    }
+
+    /** The core names the period by its index t; the user knows it by its label (2019-Q3). */
+    private static NonPositiveValueException namingThePeriod(NonPositiveValueException e, Period first) {
+        String label = SeriesVersions.periodAt(first, e.time()).label();
+        return new NonPositiveValueException(e.getMessage().replace("at t = " + e.time(),
+                "for period " + label + " (t = " + e.time() + ")"), e.time());
     }
 
     private static FitResponse.SeriesRef ref(Long id, Integer version, String name, Frequency frequency,

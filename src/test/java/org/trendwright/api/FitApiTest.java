@@ -163,7 +163,8 @@ class FitApiTest {
         String withZero = upload("period,value\n2024-01,3\n2024-02,0\n2024-03,5\n2024-04,6\n", "");
         fit(withZero, 1, "{\"model\": {\"family\": \"trend\", \"scale\": \"log\"}}").then().statusCode(422)
                 .body("type", equalTo("urn:trendwright:problem:non-positive-value"))
-                .body("detail", containsString("needs values above zero"));
+                .body("detail", containsString("needs values above zero"))
+                .body("detail", containsString("for period 2024-02 (t = 2)"));
         String two = upload("period,value\n2024-01,3\n2024-02,4\n", "");
         fit(two, 1, "{\"model\": {\"family\": \"trend\", \"shape\": \"quadratic\"}}").then().statusCode(422)
                 .body("type", equalTo("urn:trendwright:problem:insufficient-data"));

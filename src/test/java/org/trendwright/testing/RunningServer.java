@@ -11,6 +11,7 @@ import java.util.List;
 import org.trendwright.app.Settings;
 import org.trendwright.app.TrendwrightApp;
 import org.trendwright.store.Database;
+import org.trendwright.team.TeamSettings;
 
 /**
  * A really started Trendwright on a random port (port 0) over a {@link FreshStore}, for REST
@@ -21,13 +22,15 @@ public final class RunningServer implements AutoCloseable {
 
     private final FreshStore store;
     private final Settings settings;
+    private final TeamSettings teamSettings;
     private Database database;
     private TrendwrightApp app;
     private String adminToken;
 
-    private RunningServer(FreshStore store, Settings settings) {
+    private RunningServer(FreshStore store, Settings settings, TeamSettings teamSettings) {
         this.store = store;
         this.settings = settings;
+        this.teamSettings = teamSettings;
         start();
     }
 
@@ -37,7 +40,12 @@ public final class RunningServer implements AutoCloseable {
     }
 
     public static RunningServer start(FreshStore.Kind kind, Settings settings) {
-        return new RunningServer(FreshStore.create(kind), settings);
+        return new RunningServer(FreshStore.create(kind), settings, TeamAccess.testSettings());
+    }
+
+    /** A server with the default limits and the given sign-in settings. */
+    public static RunningServer start(FreshStore.Kind kind, TeamSettings teamSettings) {
+        return new RunningServer(FreshStore.create(kind), testSettings(), teamSettings);
     }
 
     /** The defaults on port 0, demo data off, no shutdown grace (stops at once; GracefulShutdownTest sets one). */
@@ -48,7 +56,7 @@ public final class RunningServer implements AutoCloseable {
 
     private void start() {
         database = store.open();
-        app = TrendwrightApp.start(settings, TeamAccess.testSettings(), database, Clock.systemUTC());
+        app = TrendwrightApp.start(settings, teamSettings, database, Clock.systemUTC());
         if (adminToken == null) {
             adminToken = TeamAccess.bootstrap(app.port());
         }

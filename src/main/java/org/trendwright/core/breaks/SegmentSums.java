@@ -56,7 +56,7 @@ final class SegmentSums {
      * Rotates the row (x, target) into (R, z); returns what is left of target, the part of the
      * new observation that the earlier rows' fit cannot explain. Overwrites x.
      */
-    private static double rotateIn(double[][] r, double[] z, double[] x, double target) {
+    static double rotateIn(double[][] r, double[] z, double[] x, double target) {
         double remaining = target;
         for (int j = 0; j < x.length; j++) {
             if (x[j] == 0) {

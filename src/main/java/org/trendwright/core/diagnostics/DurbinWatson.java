@@ -76,8 +76,12 @@ public final class DurbinWatson {
         double d = statistic(fit.residuals());
         DurbinWatsonSpectrum spectrum = DurbinWatsonSpectrum.of(design);
         DurbinWatsonDistribution distribution = new DurbinWatsonDistribution(spectrum.eigenvalues());
-        double pPositive = distribution.probabilityAtMost(d);
-        double pNegative = distribution.probabilityAtLeast(d);
+        // One inversion serves both tails: integrate the smaller one (below the mean, P(d <= d_obs))
+        // and take the other as its complement, which loses nothing since it is then above 1/2.
+        boolean lowerTailSmaller = d <= distribution.mean();
+        double smallerTail = lowerTailSmaller ? distribution.probabilityAtMost(d) : distribution.probabilityAtLeast(d);
+        double pPositive = lowerTailSmaller ? smallerTail : 1 - smallerTail;
+        double pNegative = lowerTailSmaller ? 1 - smallerTail : smallerTail;
         DurbinWatsonVerdict verdict = pPositive < level ? DurbinWatsonVerdict.POSITIVE_SERIAL_CORRELATION
                 : pNegative < level ? DurbinWatsonVerdict.NEGATIVE_SERIAL_CORRELATION : DurbinWatsonVerdict.NONE_DETECTED;
         int n = design.rows();

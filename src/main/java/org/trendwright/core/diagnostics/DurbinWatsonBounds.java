@@ -1,5 +1,9 @@
 package org.trendwright.core.diagnostics;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.InvalidSpecificationException;
 import org.trendwright.core.TestResult;
@@ -51,6 +55,32 @@ public record DurbinWatsonBounds(int observations, int regressorsExcludingConsta
     public static DurbinWatsonBounds of(int observations, int regressorsExcludingConstant, double level) {
         checkArguments(observations, regressorsExcludingConstant);
         TestResult.checkLevel(level);
+        return COMPUTED.computeIfAbsent(new Cell(observations, regressorsExcludingConstant, level),
+                cell -> compute(observations, regressorsExcludingConstant, level));
+    }
+
+    /**
+     * The bounds are a pure function of (n, k', level) and each costs a few dozen exact
+     * distribution evaluations, while a service meets the same few cells again and again, so the
+     * most recently used {@value #REMEMBERED_CELLS} are remembered, like a printed table that
+     * grows as it is used. Access is synchronized; a miss computes under the lock (milliseconds).
+     */
+    private static final int REMEMBERED_CELLS = 512;
+
+    private static final Map<Cell, DurbinWatsonBounds> COMPUTED = Collections.synchronizedMap(
+            new LinkedHashMap<>(64, 0.75f, true) {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<Cell, DurbinWatsonBounds> eldest) {
+                    return size() > REMEMBERED_CELLS;
+                }
+            });
+
+    private record Cell(int observations, int regressorsExcludingConstant, double level) {
+    }
+
+    private static DurbinWatsonBounds compute(int observations, int regressorsExcludingConstant, double level) {
         double lower = DurbinWatsonDistribution.lowerBounding(observations, regressorsExcludingConstant).quantile(level);
         double upper = DurbinWatsonDistribution.upperBounding(observations, regressorsExcludingConstant).quantile(level);
         return new DurbinWatsonBounds(observations, regressorsExcludingConstant, level, lower, upper);

@@ -78,13 +78,16 @@ public record TrendFit(TrendSpec spec, Observations series, OlsFit ols, Optional
         TDistribution t = new TDistribution(null, ols.residualDegreesOfFreedom());
         List<ForecastPoint> points = new ArrayList<>(times.length);
         List<BackTransformed> back = new ArrayList<>();
+        double[] quantiles = levels.stream().mapToDouble(level -> t.inverseCumulativeProbability(1 - (1 - level) / 2))
+                .toArray();
         for (int time : times) {
             double[] x = design.row(time);
             double m = ols.predict(x);
             double se = ols.standardErrorOfEstimate() * Math.sqrt(1 + ols.leverage(x));
             List<PredictionInterval> intervals = new ArrayList<>(levels.size());
-            for (double level : levels) {
-                double half = t.inverseCumulativeProbability(1 - (1 - level) / 2) * se;
+            for (int l = 0; l < quantiles.length; l++) {
+                double level = levels.get(l);
+                double half = quantiles[l] * se;
                 intervals.add(spec.logScale()
                         ? new PredictionInterval(level, Math.exp(m - half), Math.exp(m + half))
                         : new PredictionInterval(level, m - half, m + half));
