@@ -52,7 +52,11 @@ class AuthorizationMatrixTest {
             Map.entry("DELETE /api/tokens/{id}", Rule.OWN_WRITE),
             Map.entry("GET /api/members", Rule.ADMIN_READ), Map.entry("POST /api/members", Rule.ADMIN_WRITE),
             Map.entry("PATCH /api/members/{id}", Rule.ADMIN_WRITE),
-            Map.entry("DELETE /api/members/{id}", Rule.ADMIN_WRITE), Map.entry("GET /api/audit", Rule.ADMIN_READ)));
+            Map.entry("DELETE /api/members/{id}", Rule.ADMIN_WRITE), Map.entry("GET /api/audit", Rule.ADMIN_READ),
+            // The page: the upload dry run, the model comparison (computes, stores nothing), its HTML entry points.
+            Map.entry("POST /api/series/preview", Rule.EDITOR),
+            Map.entry("POST /api/series/{id}/versions/{version}/comparison", Rule.MEMBER),
+            Map.entry("GET /setup", Rule.OPEN), Map.entry("GET /b/{token}", Rule.OPEN)));
 
     private RunningServer server;
     private final Map<Caller, Function<RequestSpecification, RequestSpecification>> callers = new TreeMap<>();
