@@ -55,6 +55,10 @@ final class AuthGate {
     }
 
     private void authorize(Context ctx) {
+        if (ctx.endpoints().matchedHttpEndpoint() == null) {
+            // No route matched: a static file of the page (web/, webjars), public like the page itself.
+            return;
+        }
         String route = ctx.method().name() + " " + ctx.endpoints().matchedHttpEndpoint().path;
         ctx.attribute(ROUTE, route);
         Access access = Access.RULES.get(route);

@@ -92,6 +92,7 @@ public final class HttpApi {
                     routes.add(h.getHttpMethod().name() + " " + h.getPath());
                 }
             });
+            PageRoutes.configure(config);
             ProblemMapper.register(config.routes);
             config.routes.before(ctx -> services.storeReady().join());
             new AuthGate(team.members(), team.tokens(), team.audit(), team.settings()).register(config.routes);
@@ -102,6 +103,9 @@ public final class HttpApi {
             new TeamRoutes(team, uploads).register(config.routes);
             new BriefRoutes(services.series(), team.briefs(), fitService, uploads, services.mapper(), team.clock())
                     .register(config.routes);
+            new PreviewRoutes(uploads).register(config.routes);
+            new ComparisonRoutes(services.series(), uploads).register(config.routes);
+            PageRoutes.register(config.routes);
             new OperationsRoutes(services.databaseReachable(), services.registry()).register(config.routes);
         });
         return new Built(app, routes);

@@ -61,6 +61,11 @@ final class Uploads {
         };
     }
 
+    /** Every series of a CSV body (the preview reads a body it has edited). */
+    List<SeriesInput> readCsv(byte[] body, IntakeOptions options) {
+        return CsvIntake.read(body, options);
+    }
+
     /** The one series of a revision request. */
     SeriesInput readOne(Context ctx) {
         IntakeOptions options = options(ctx);

@@ -40,7 +40,10 @@ public enum Access {
             Map.entry("GET /api/public/briefs/{token}", PUBLIC),
             Map.entry("GET /api/audit", ADMIN_READ),
             Map.entry("POST /api/jobs", EDIT), Map.entry("GET /api/jobs/{id}", READ),
-            Map.entry("GET /api/jobs/{id}/results", READ));
+            Map.entry("GET /api/jobs/{id}/results", READ),
+            Map.entry("POST /api/series/preview", EDIT),
+            Map.entry("POST /api/series/{id}/versions/{version}/comparison", READ),
+            Map.entry("GET /setup", PUBLIC), Map.entry("GET /b/{token}", PUBLIC));
 
     /**
      * Checks that {@code principal} (null when anonymous) may call a route with this rule: 401

@@ -54,7 +54,11 @@ class AuthorizationMatrixTest {
             Map.entry("PATCH /api/members/{id}", Rule.ADMIN_WRITE),
             Map.entry("DELETE /api/members/{id}", Rule.ADMIN_WRITE), Map.entry("GET /api/audit", Rule.ADMIN_READ),
             Map.entry("POST /api/jobs", Rule.EDITOR), Map.entry("GET /api/jobs/{id}", Rule.MEMBER),
-            Map.entry("GET /api/jobs/{id}/results", Rule.MEMBER)));
+            Map.entry("GET /api/jobs/{id}/results", Rule.MEMBER),
+            // The page: the upload dry run, the model comparison (computes, stores nothing), its HTML entry points.
+            Map.entry("POST /api/series/preview", Rule.EDITOR),
+            Map.entry("POST /api/series/{id}/versions/{version}/comparison", Rule.MEMBER),
+            Map.entry("GET /setup", Rule.OPEN), Map.entry("GET /b/{token}", Rule.OPEN)));
 
     private RunningServer server;
     private final Map<Caller, Function<RequestSpecification, RequestSpecification>> callers = new TreeMap<>();

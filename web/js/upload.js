@@ -1,0 +1,131 @@
+// Upload: a CSV file (drop or chooser) or cells pasted from a spreadsheet. The server's dry run
+// (POST /api/series/preview) reads it first; the preview shows every line with its problems,
+// and Save sends the same text to POST /api/series with a progress bar.
+import { post, postWithProgress } from './api.js';
+import { byId, el, fill, say } from './dom.js';
+
+let pending = null; // { text, contentType, delimiter }
+
+export function showUpload() {
+  reset();
+}
+
+function reset() {
+  pending = null;
+  byId('preview').hidden = true;
+  byId('upload-progress-row').hidden = true;
+  byId('paste-input').value = '';
+  byId('file-input').value = '';
+  say(byId('upload-message'), '');
+}
+
+function query(delimiter) {
+  const params = new URLSearchParams({ missing: byId('upload-missing').value });
+  const name = byId('upload-name').value.trim();
+  if (name) params.set('name', name);
+  if (delimiter) params.set('delimiter', delimiter);
+  return params.toString();
+}
+
+async function preview(text, source) {
+  const delimiter = text.includes('\t') ? 'tab' : null;
+  pending = { text, contentType: delimiter ? 'text/tab-separated-values' : 'text/csv', delimiter };
+  say(byId('upload-message'), `Reading ${source}…`);
+  try {
+    const answer = await post(`/api/series/preview?${query(delimiter)}`, text, pending.contentType);
+    showPreview(text, delimiter, answer);
+    say(byId('upload-message'), answer.acceptable ? `${source} reads cleanly. Check the preview, then save.`
+      : `${source} has ${answer.problems.length} problem(s); they are marked below. Fix them and read it again.`,
+    answer.acceptable ? 'ok' : 'error');
+  } catch (error) {
+    byId('preview').hidden = true;
+    say(byId('upload-message'), error.message, 'error');
+  }
+}
+
+function showPreview(text, delimiter, answer) {
+  const caveat = answer.acceptable || answer.series.length === 0 ? null
+    : el('p', {}, 'What the rest of the data reads as, leaving out the marked lines:');
+  fill(byId('preview-summary'), caveat, answer.series.length === 0 ? null : el('ul', { class: 'notes' },
+    answer.series.map((s) => el('li', {}, el('strong', {}, s.name), `: ${s.frequency} (${s.periodsPerYear} per year), `,
+      `${s.observationCount} observations, ${s.observations[0]?.period ?? ''} to ${s.observations.at(-1)?.period ?? ''}`))));
+  const byLine = new Map();
+  for (const problem of answer.problems) {
+    const key = problem.line ?? 0;
+    byLine.set(key, [...(byLine.get(key) || []), problem]);
+  }
+  const lines = text.replace(/\r/g, '').split('\n');
+  while (lines.length && lines.at(-1).trim() === '') lines.pop();
+  const rows = lines.map((line, i) => lineRow(i + 1, splitCells(line, delimiter), byLine.get(i + 1)));
+  const general = byLine.get(0) || [];
+  const generalRows = general.map((p) => el('tr', { class: 'problem' }, el('th', { scope: 'row' }, '—'),
+    el('td', { colspan: 2 }, problemText(p))));
+  fill(byId('preview-table').tBodies[0], generalRows, rows);
+  byId('upload-save').disabled = !answer.acceptable;
+  byId('preview').hidden = false;
+}
+
+function splitCells(line, delimiter) {
+  const separator = delimiter === 'tab' ? '\t' : (line.includes(';') && !line.includes(',') ? ';' : ',');
+  return line.split(separator);
+}
+
+function lineRow(number, cells, problems) {
+  const marked = problems && problems.length > 0;
+  return el('tr', { class: marked ? 'problem' : null },
+    el('th', { scope: 'row', class: 'num' }, String(number)),
+    el('td', { class: 'cells' }, cells.map((c, i) => el('span', { class: problemAt(problems, i + 1) ? 'cell bad-cell' : 'cell' }, c))),
+    el('td', {}, marked ? problems.map(problemText) : ''));
+}
+
+function problemAt(problems, column) {
+  return (problems || []).some((p) => p.column === column);
+}
+
+function problemText(p) {
+  return el('span', { class: 'problem-text' }, el('span', { 'aria-hidden': 'true' }, '✗ '),
+    `Problem${p.column ? ` in column ${p.column}` : ''}: ${p.detail}`);
+}
+
+async function save() {
+  if (!pending) return;
+  byId('upload-save').disabled = true;
+  byId('upload-progress-row').hidden = false;
+  const bar = byId('upload-progress');
+  const progress = (fraction) => {
+    bar.value = Math.round(fraction * 90);
+    byId('upload-progress-text').textContent = `${bar.value}%`;
+  };
+  try {
+    const answer = await postWithProgress(`/api/series?${query(pending.delimiter)}`, pending.text, pending.contentType, progress);
+    bar.value = 100;
+    byId('upload-progress-text').textContent = `100% – ${answer.series.length} series saved`;
+    const created = answer.series;
+    location.hash = created.length === 1 ? `#/series/${created[0].id}` : '#/';
+  } catch (error) {
+    byId('upload-save').disabled = false;
+    say(byId('upload-message'), error.message, 'error');
+  }
+}
+
+async function readFile(file) {
+  if (!file) return;
+  preview(await file.text(), file.name);
+}
+
+const zone = byId('drop-zone');
+zone.addEventListener('dragover', (e) => { e.preventDefault(); zone.classList.add('dragging'); });
+zone.addEventListener('dragleave', () => zone.classList.remove('dragging'));
+zone.addEventListener('drop', (e) => {
+  e.preventDefault();
+  zone.classList.remove('dragging');
+  readFile(e.dataTransfer.files[0]);
+});
+byId('file-input').addEventListener('change', (e) => readFile(e.target.files[0]));
+byId('paste-preview').addEventListener('click', () => {
+  const text = byId('paste-input').value;
+  if (text.trim()) preview(text, 'The pasted data');
+  else say(byId('upload-message'), 'Paste some cells first.', 'error');
+});
+byId('upload-save').addEventListener('click', save);
+byId('upload-cancel').addEventListener('click', reset);
