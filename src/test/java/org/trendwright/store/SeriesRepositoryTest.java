@@ -50,8 +50,12 @@ class SeriesRepositoryTest {
 
     @AfterEach
     void close() {
-        database.close();
-        store.close();
+        if (database != null) { // null when the PostgreSQL variant was skipped
+            database.close();
+        }
+        if (store != null) {
+            store.close();
+        }
     }
 
     private static SeriesDraft annual(String name, double... values) {
