@@ -1,6 +1,9 @@
 package org.trendwright.core.breaks;
 
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import org.trendwright.core.InvalidSpecificationException;
 import org.trendwright.core.TestResult;
 import org.trendwright.core.regression.Design;
@@ -87,8 +90,34 @@ public record SupFNullDistribution(long seed, double[] draws) {
      *         over all rows or within the shortest first or last segment
      */
     public static SupFNullDistribution forDesign(Design design) {
-        return forDesign(design, defaultReplications(design.rows(), design.width()));
+        SupFNullDistribution remembered = REMEMBERED.get(design);
+        if (remembered != null) {
+            return remembered;
+        }
+        SupFNullDistribution simulated = forDesign(design, defaultReplications(design.rows(), design.width()));
+        REMEMBERED.put(design, simulated);
+        return simulated;
     }
+
+    /**
+     * The simulation is a pure function of the design (its seed comes from the design), and a
+     * service meets the same few designs again and again (every 48-quarter linear trend has the
+     * same regressors), so the {@value #REMEMBERED_DESIGNS} most recently used are kept. Keyed by
+     * the design itself (value equality), so a hash collision cannot return another design's law.
+     * Synchronized; a miss simulates outside the lock, and two threads may both simulate the same
+     * design once, with identical results.
+     */
+    private static final int REMEMBERED_DESIGNS = 64;
+
+    private static final Map<Design, SupFNullDistribution> REMEMBERED = Collections.synchronizedMap(
+            new LinkedHashMap<>(16, 0.75f, true) {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                protected boolean removeEldestEntry(Map.Entry<Design, SupFNullDistribution> eldest) {
+                    return size() > REMEMBERED_DESIGNS;
+                }
+            });
 
     /**
      * Simulates {@code replications} values of sup F with y* = z ~ N(0, I) on this design, seeded

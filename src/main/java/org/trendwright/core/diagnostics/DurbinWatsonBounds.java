@@ -3,7 +3,6 @@ package org.trendwright.core.diagnostics;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
-
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.InvalidSpecificationException;
 import org.trendwright.core.TestResult;
