@@ -128,7 +128,7 @@ public final class ModelSelection {
         Optional<TestResult> dm = evaluated.size() < 2 ? Optional.empty()
                 : Optional.of(DieboldMariano.test(evaluated.get(0).name(), evaluated.get(0).oneStepErrors(),
                         evaluated.get(1).name(), evaluated.get(1).oneStepErrors(), 1, spec.level()));
-        List<String> reasons = Recommendation.reasons(chosen, evaluated, bestPassing.isPresent(), dm);
+        List<String> reasons = Recommendation.reasons(chosen, evaluated, bestPassing.isPresent(), dm, spec.level());
         return new ModelComparison(spec, ranked, Optional.of(chosen.name()), reasons, bestPassing.isEmpty(), dm);
     }
 

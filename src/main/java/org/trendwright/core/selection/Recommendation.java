@@ -13,7 +13,7 @@ final class Recommendation {
     }
 
     static List<String> reasons(CandidateAssessment chosen, List<CandidateAssessment> evaluated,
-                                boolean chosenPasses, Optional<TestResult> dm) {
+                                boolean chosenPasses, Optional<TestResult> dm, double level) {
         List<String> reasons = new ArrayList<>();
         double rmse = chosen.rollingOrigin().orElseThrow().rmse();
         if (chosenPasses) {
@@ -26,7 +26,7 @@ final class Recommendation {
         }
         if (evaluated.get(0) != chosen) {
             reasons.add(evaluated.get(0).name() + " forecast better (RMSE " + format(evaluated.get(0).score())
-                    + ") but failed a residual check: " + failedChecks(evaluated.get(0)) + ".");
+                    + ") but failed a residual check: " + failedChecks(evaluated.get(0), level) + ".");
         }
         chosen.holdout().ifPresent(h -> reasons.add("On the " + h.forecasts() + "-period holdout its RMSE is "
                 + format(h.rmse()) + h.mase().map(m -> " and its MASE " + format(m)
@@ -36,8 +36,9 @@ final class Recommendation {
         return reasons;
     }
 
-    private static String failedChecks(CandidateAssessment assessment) {
-        return String.join(", ", assessment.residualChecks().stream().filter(TestResult::rejected)
+    /** The checks whose p-value falls below the comparison's level: the same rule that decides passing. */
+    private static String failedChecks(CandidateAssessment assessment, double level) {
+        return String.join(", ", assessment.residualChecks().stream().filter(c -> c.pValue() < level)
                 .map(TestResult::test).toList());
     }
 
