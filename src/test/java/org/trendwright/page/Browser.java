@@ -128,6 +128,9 @@ final class Browser implements AutoCloseable {
      * innerWidth; zero or less when the body does not scroll sideways.
      */
     long horizontalOverflow() {
+        // Charts redraw at the new width a few frames after a resize; judge the settled layout.
+        driver.executeAsyncScript("const done = arguments[arguments.length - 1];"
+                + " requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(done, 300)));");
         return ((Number) js("return document.documentElement.scrollWidth - window.innerWidth")).longValue();
     }
 
