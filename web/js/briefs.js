@@ -37,10 +37,10 @@ function row(brief, seriesName, tracking, canRevoke) {
   const described = `${name}, published ${when(brief.publishedAt)}`;
   const link = new URL(brief.url, location.origin).href;
   return el('tr', { 'data-brief': brief.id },
-    el('th', { scope: 'row' }, name),
-    el('td', {}, `${seriesName ?? `series ${brief.seriesId} (deleted)`}, version ${brief.seriesVersion}`),
-    el('td', {}, brief.author ?? '—'),
-    el('td', {}, el('time', { datetime: brief.publishedAt }, when(brief.publishedAt))),
+    el('th', { scope: 'row' }, el('span', { class: 'brief-name' }, name),
+      el('small', { class: 'brief-series' }, `${seriesName ?? `series ${brief.seriesId} (deleted)`}, version ${brief.seriesVersion}`)),
+    el('td', {}, el('time', { datetime: brief.publishedAt }, when(brief.publishedAt)),
+      el('small', { class: 'brief-author' }, `by ${brief.author ?? 'a removed member'}`)),
     el('td', {}, status(brief), tracking ? [' ', missBadge(tracking)] : null),
     el('td', {}, brief.shared ? [
       el('a', { href: brief.url, target: '_blank', rel: 'noopener' }, 'Open', el('span', { class: 'visually-hidden' }, ` ${described}`)),

@@ -202,12 +202,19 @@ class PageBrowserTest {
         String link = browser.find("#brief-link").getAttribute("value");
         String path = URI.create(link).getPath();
 
+        // An actual far outside any interval of a series near 150 arrives for the first forecast period.
+        String etag = server.given().get("/api/series/" + id).then().extract().header("ETag");
+        server.given().contentType("text/csv").header("If-Match", etag)
+                .body("period,listed_sales\n2025-Q1,400\n").post("/api/series/" + id + "/versions").then().statusCode(201);
+
         visit("#/briefs");
         WebElement row = briefRow(browser, path);
-        assertEquals("Forecast: listed_sales", row.findElement(By.tagName("th")).getText());
+        assertEquals("Forecast: listed_sales", row.findElement(By.cssSelector(".brief-name")).getText());
+        assertEquals("listed_sales, version 1", row.findElement(By.cssSelector(".brief-series")).getText());
+        assertEquals("by " + TeamAccess.ADMIN, row.findElement(By.cssSelector(".brief-author")).getText());
         String briefId = row.getAttribute("data-brief");
         String text = row.getText();
-        assertTrue(text.contains("listed_sales, version 1") && text.contains(TeamAccess.ADMIN) && text.contains("Shared"), text);
+        assertTrue(text.contains("Shared") && text.contains("1 actual(s) outside the 95% interval"), text);
         browser.driver.executeCdpCommand("Browser.grantPermissions", Map.of("origin", base(),
                 "permissions", List.of("clipboardReadWrite", "clipboardSanitizedWrite")));
         row.findElement(By.xpath(".//button[text()='Copy link']")).click();
