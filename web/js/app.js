@@ -5,13 +5,15 @@ import { showList } from './list.js';
 import { showUpload } from './upload.js';
 import { showSeries } from './series.js';
 import { showMembers, showTokens } from './team.js';
+import { showBriefs } from './briefs.js';
 
-const views = ['signin', 'list', 'upload', 'series', 'members', 'tokens'];
+const views = ['signin', 'list', 'upload', 'series', 'briefs', 'members', 'tokens'];
 
 const routes = [
   [/^#\/?$/, 'list', () => showList()],
   [/^#\/upload$/, 'upload', () => showUpload()],
   [/^#\/series\/(\d+)$/, 'series', (m) => showSeries(Number(m[1]))],
+  [/^#\/briefs$/, 'briefs', () => showBriefs()],
   [/^#\/members$/, 'members', () => showMembers()],
   [/^#\/tokens$/, 'tokens', () => showTokens()],
   [/^#\/signin$/, 'signin', () => session.showSignIn()],
@@ -41,10 +43,20 @@ async function route() {
       } catch (error) {
         say(byId('global-message'), error.message, 'error');
       }
+      keepFocusInView();
       return;
     }
   }
   location.hash = '#/';
+}
+
+/**
+ * After a change of view, a keyboard user whose focus was on a control of the view that is now
+ * hidden (or nowhere) continues from the top of the main content, not from the start of the page.
+ */
+function keepFocusInView() {
+  const active = document.activeElement;
+  if (!active || active === document.body || active.closest('[hidden]')) byId('main').focus({ preventScroll: true });
 }
 
 // Counts what the Content-Security-Policy blocked, so a test (or a person in the console) sees it.

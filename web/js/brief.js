@@ -49,7 +49,9 @@ function checks(tests) {
 function tracking(track) {
   const section = byId('tracking-section');
   const rows = track?.periods || [];
-  if (!track || rows.length === 0) {
+  const table = byId('brief-tracking').closest('.table-wrap');
+  table.hidden = !track || rows.length === 0;
+  if (table.hidden) {
     byId('tracking-summary').textContent = 'No actuals have arrived for the forecast periods yet.';
     fill(byId('brief-tracking').tBodies[0]);
     section.hidden = false;

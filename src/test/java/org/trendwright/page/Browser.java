@@ -10,6 +10,7 @@ import java.time.Duration;
 import java.util.Comparator;
 import java.util.stream.Stream;
 import org.openqa.selenium.By;
+import org.openqa.selenium.Dimension;
 import org.openqa.selenium.JavascriptExecutor;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
@@ -17,6 +18,7 @@ import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.chrome.ChromeDriverService;
 import org.openqa.selenium.chrome.ChromeOptions;
 import org.openqa.selenium.support.ui.ExpectedCondition;
+import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
@@ -100,8 +102,36 @@ final class Browser implements AutoCloseable {
     /** A screenshot of the whole page height, not only the window. */
     void fullScreenshot(String name, int width) {
         long height = ((Number) js("return document.documentElement.scrollHeight")).longValue();
-        driver.manage().window().setSize(new org.openqa.selenium.Dimension(width, (int) Math.min(height + 140, 6000)));
+        driver.manage().window().setSize(new Dimension(width, (int) Math.min(height + 140, 6000)));
         screenshot(name);
+    }
+
+    /** Signs in through the sign-in screen of the page at {@code base} and waits for the session. */
+    void signIn(String base, String username, String password) {
+        driver.get(base + "/");
+        awaitReady();
+        await(ExpectedConditions.visibilityOfElementLocated(By.id("signin-form")));
+        find("#signin-username").sendKeys(username);
+        find("#signin-password").sendKeys(password);
+        find("#signin-form button[type=submit]").click();
+        await(ExpectedConditions.textToBePresentInElementLocated(By.id("session-user"), username));
+    }
+
+    /** Sets the size of the browser window, which in headless Chromium is the size of the viewport. */
+    void resize(int width, int height) {
+        driver.manage().window().setSize(new Dimension(width, height));
+        await(d -> ((Number) js("return window.innerWidth")).intValue() == width);
+    }
+
+    /**
+     * How far the page is wider than the viewport, in CSS pixels: scrollWidth of the document minus
+     * innerWidth; zero or less when the body does not scroll sideways.
+     */
+    long horizontalOverflow() {
+        // Charts redraw at the new width a few frames after a resize; judge the settled layout.
+        driver.executeAsyncScript("const done = arguments[arguments.length - 1];"
+                + " requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(done, 300)));");
+        return ((Number) js("return document.documentElement.scrollWidth - window.innerWidth")).longValue();
     }
 
     @Override

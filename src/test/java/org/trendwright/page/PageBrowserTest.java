@@ -7,12 +7,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
+import java.net.URI;
 import java.time.Clock;
 import java.util.List;
-import java.util.Random;
+import java.util.Map;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -49,14 +47,7 @@ class PageBrowserTest {
 
     /** Signs the browser in as the test server's first admin through the sign-in screen. */
     private static void signIn() {
-        browser.driver.get(base() + "/");
-        browser.awaitReady();
-        browser.await(ExpectedConditions.visibilityOfElementLocated(By.id("signin-form")));
-        browser.screenshot("sign-in");
-        browser.find("#signin-username").sendKeys(TeamAccess.ADMIN);
-        browser.find("#signin-password").sendKeys(TeamAccess.ADMIN_PASSWORD);
-        browser.find("#signin-form button[type=submit]").click();
-        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("session-user"), TeamAccess.ADMIN));
+        browser.signIn(base(), TeamAccess.ADMIN, TeamAccess.ADMIN_PASSWORD);
     }
 
     @AfterAll
@@ -85,7 +76,7 @@ class PageBrowserTest {
         browser.driver.manage().window().setSize(new Dimension(1280, 800));
         visit("#/upload");
         // Line 4 holds a value that is not a number; the preview must mark that line and refuse to save.
-        browser.find("#file-input").sendKeys(csvFile(quarterlySales().replace("\n2016-Q3,", "\n2016-Q3,12O.5x\n2016-Q3-bad,"))
+        browser.find("#file-input").sendKeys(DemoSeries.csvFile(DemoSeries.quarterlySales().replace("\n2016-Q3,", "\n2016-Q3,12O.5x\n2016-Q3-bad,"))
                 .toString());
         browser.await(ExpectedConditions.visibilityOfElementLocated(By.cssSelector("#preview-table tr.problem")));
         List<WebElement> marked = browser.driver.findElements(By.cssSelector("#preview-table tr.problem"));
@@ -95,7 +86,7 @@ class PageBrowserTest {
         browser.driver.manage().window().setSize(new Dimension(1280, 800));
 
         browser.find("#upload-cancel").click();
-        browser.find("#file-input").sendKeys(csvFile(quarterlySales()).toString());
+        browser.find("#file-input").sendKeys(DemoSeries.csvFile(DemoSeries.quarterlySales()).toString());
         browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("preview-summary"), "quarterly"));
         assertTrue(browser.driver.findElements(By.cssSelector("#preview-table tr.problem")).isEmpty());
         browser.screenshot("upload-preview");
@@ -157,7 +148,7 @@ class PageBrowserTest {
 
     @Test
     void publishes_a_brief_that_a_fresh_anonymous_browser_opens_prints_and_tracks() {
-        String created = server.given().contentType("text/csv").body(quarterlySales().replace("store_sales", "brief_sales"))
+        String created = server.given().contentType("text/csv").body(DemoSeries.quarterlySales().replace("store_sales", "brief_sales"))
                 .post("/api/series").then().statusCode(201).extract().path("series[0].id").toString();
         long id = (long) Double.parseDouble(created);
         browser.driver.manage().window().setSize(new Dimension(1280, 800));
@@ -196,6 +187,79 @@ class PageBrowserTest {
             reader.screenshot("brief-print-a4");
             assertFalse(reader.find("#print-button").isDisplayed(), "the print button is printed");
         }
+    }
+
+    @Test
+    void lists_a_published_brief_copies_its_link_and_revokes_it_so_that_the_link_answers_as_gone() {
+        String created = server.given().contentType("text/csv").body(DemoSeries.quarterlySales().replace("store_sales", "listed_sales"))
+                .post("/api/series").then().statusCode(201).extract().path("series[0].id").toString();
+        long id = (long) Double.parseDouble(created);
+        browser.resize(1280, 800);
+        visit("#/series/" + id);
+        browser.await(ExpectedConditions.attributeContains(By.id("results"), "data-fitted", "trend"));
+        browser.find("#publish-button").click();
+        browser.await(ExpectedConditions.visibilityOfElementLocated(By.id("brief-link-row")));
+        String link = browser.find("#brief-link").getAttribute("value");
+        String path = URI.create(link).getPath();
+
+        // An actual far outside any interval of a series near 150 arrives for the first forecast period.
+        String etag = server.given().get("/api/series/" + id).then().extract().header("ETag");
+        server.given().contentType("text/csv").header("If-Match", etag)
+                .body("period,listed_sales\n2025-Q1,400\n").post("/api/series/" + id + "/versions").then().statusCode(201);
+
+        visit("#/briefs");
+        WebElement row = briefRow(browser, path);
+        assertEquals("Forecast: listed_sales", row.findElement(By.cssSelector(".brief-name")).getText());
+        assertEquals("listed_sales, version 1", row.findElement(By.cssSelector(".brief-series")).getText());
+        assertEquals("by " + TeamAccess.ADMIN, row.findElement(By.cssSelector(".brief-author")).getText());
+        String briefId = row.getAttribute("data-brief");
+        String text = row.getText();
+        assertTrue(text.contains("Shared") && text.contains("1 actual(s) outside the 95% interval"), text);
+        browser.driver.executeCdpCommand("Browser.grantPermissions", Map.of("origin", base(),
+                "permissions", List.of("clipboardReadWrite", "clipboardSanitizedWrite")));
+        row.findElement(By.xpath(".//button[text()='Copy link']")).click();
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("briefs-message"), "Link copied"));
+        assertEquals(link, browser.driver.executeAsyncScript("const done = arguments[arguments.length - 1];"
+                + "navigator.clipboard.readText().then(done, e => done('clipboard: ' + e));"));
+        browser.screenshot("briefs");
+
+        server.given().contentType("application/json")
+                .body(Map.of("username", "reader", "password", "reader-password-1", "role", "viewer"))
+                .post("/api/members").then().statusCode(201);
+        try (Browser viewer = Browser.open(1280, 800)) {
+            viewer.signIn(base(), "reader", "reader-password-1");
+            viewer.driver.get(base() + "/#/briefs");
+            WebElement seen = briefRow(viewer, path);
+            assertTrue(viewer.find("#briefs-readonly").isDisplayed(), "a viewer is not told that access is read-only");
+            assertTrue(seen.findElements(By.xpath(".//button[starts-with(., 'Revoke')]")).isEmpty(),
+                    "a read-only member is offered to revoke");
+            assertFalse(seen.findElements(By.xpath(".//button[text()='Copy link']")).isEmpty());
+        }
+
+        // Declining the confirmation leaves the brief shared.
+        row.findElement(By.xpath(".//button[text()='Revoke']")).click();
+        browser.await(ExpectedConditions.alertIsPresent()).dismiss();
+        server.anonymous().get("/api/public/briefs/" + path.substring(3)).then().statusCode(200);
+        row.findElement(By.xpath(".//button[text()='Revoke']")).click();
+        browser.await(ExpectedConditions.alertIsPresent()).accept();
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("briefs-message"), "Revoked"));
+        WebElement revoked = browser.find("#briefs-table tr[data-brief='" + briefId + "']");
+        assertTrue(revoked.getText().contains("Revoked"), revoked.getText());
+        assertTrue(revoked.findElements(By.tagName("button")).isEmpty(), "a revoked brief still offers actions");
+
+        try (Browser reader = Browser.open(1280, 800)) {
+            reader.driver.get(link);
+            reader.awaitReady();
+            assertEquals("This brief does not exist or was withdrawn.", reader.find("#brief-message").getText());
+            assertFalse(reader.find("#brief").isDisplayed(), "a revoked brief is still shown");
+        }
+        server.anonymous().get("/api/public/briefs/" + path.substring(3)).then().statusCode(404);
+    }
+
+    /** The row of the briefs screen whose link opens {@code path}. */
+    private static WebElement briefRow(Browser in, String path) {
+        return in.await(ExpectedConditions.visibilityOfElementLocated(By.cssSelector("#briefs-table a[href='" + path + "']")))
+                .findElement(By.xpath("./ancestor::tr"));
     }
 
     @Test
@@ -250,24 +314,5 @@ class PageBrowserTest {
                 + ".map(c => c.id); if (bad.length) return 'unlabelled: ' + bad.join(', ');"
                 + "return document.body.dataset.cspViolations ? 'CSP violations: ' + document.body.dataset.cspViolations"
                 + " : 'ready';");
-    }
-
-    /** Demo data: 36 quarters of a seeded upward trend with a seasonal swing and noise. */
-    private static String quarterlySales() {
-        Random random = new Random(42L);
-        StringBuilder csv = new StringBuilder("period,store_sales\n");
-        for (int t = 0; t < 36; t++) {
-            double season = new double[] {-6, 2, 5, -1}[t % 4];
-            csv.append(2016 + t / 4).append("-Q").append(t % 4 + 1).append(',')
-                    .append(String.format(java.util.Locale.ROOT, "%.2f", 100 + 1.5 * t + season + 2 * random.nextGaussian()))
-                    .append('\n');
-        }
-        return csv.toString();
-    }
-
-    private static Path csvFile(String text) throws IOException {
-        Path file = Files.createTempFile("trendwright-upload-", ".csv");
-        file.toFile().deleteOnExit();
-        return Files.writeString(file, text, StandardCharsets.UTF_8);
     }
 }
