@@ -7,6 +7,7 @@ import io.micrometer.prometheusmetrics.PrometheusConfig;
 import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.time.Clock;
 import java.util.List;
@@ -78,6 +79,8 @@ public final class TrendwrightApp implements AutoCloseable {
             CompletableFuture<Void> ready = CompletableFuture.runAsync(() -> {
                 database.migrate();
                 seed(settings, new SeriesRepository(database, clock));
+                LOG.info("event=store-ready jvmUptimeMs={} threadCpuMs={}", uptimeMs(),
+                        ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime() / 1_000_000);
             });
             app = start(settings, team, database, clock, true, ready);
             ready.join();
@@ -127,8 +130,7 @@ public final class TrendwrightApp implements AutoCloseable {
                 settings.shutdownGrace(), ready, settings.maxConcurrentFits(), settings.maxQueuedFits(), jobs), team);
         built.app().start(settings.host(), settings.port());
         LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={}", settings.host(), built.app().port(),
-                database.dialect().name().toLowerCase(java.util.Locale.ROOT),
-                java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
+                database.dialect().name().toLowerCase(java.util.Locale.ROOT), uptimeMs());
         // Workers start once the store is migrated; requests wait for the same moment.
         JobWorker worker = new JobWorker(jobs, series, settings.jobWorkers(), settings.jobLease(), ready);
         return new TrendwrightApp(built.app(), built.routes(), database, owns, team, settings.host(), worker);
@@ -152,6 +154,11 @@ public final class TrendwrightApp implements AutoCloseable {
             System.out.println(team.setupCode().announcement("http://" + host + ":" + server.port()));
         }
         return this;
+    }
+
+    /** Milliseconds since the JVM started, for the start-up events of the log. */
+    static long uptimeMs() {
+        return ManagementFactory.getRuntimeMXBean().getUptime();
     }
 
     private static void createDirectory(Settings settings) {
