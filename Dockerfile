@@ -5,11 +5,16 @@
 
 FROM maven:3.9-eclipse-temurin-17 AS build
 WORKDIR /src
+# Dependencies first, in a layer of their own that a source change does not invalidate.
 COPY pom.xml ./
 RUN mvn -B -q dependency:go-offline
+# Everything the jar is built from: the code, the demo series and the browser page (web/ is packed
+# into the jar; without it the server refuses to start, as its static files would be missing).
 COPY src ./src
 COPY demo-data ./demo-data
-RUN mvn -B -q -o package -DskipTests
+COPY web ./web
+# Not offline (-o): go-offline does not fetch every plugin dependency a build resolves at run time.
+RUN mvn -B -q package -DskipTests
 
 FROM eclipse-temurin:17-jre
 RUN groupadd --system --gid 10001 trendwright \

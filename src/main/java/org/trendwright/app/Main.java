@@ -21,7 +21,7 @@ public final class Main {
             System.exit(2);
             return;
         }
-        LOG.info("event=starting jvmUptimeMs={}", java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
+        LOG.info("event=starting jvmUptimeMs={}", TrendwrightApp.uptimeMs());
         try {
             TrendwrightApp app = TrendwrightApp.start(settings, Clock.systemUTC());
             Runtime.getRuntime().addShutdownHook(new Thread(app::close, "trendwright-shutdown"));

@@ -1,5 +1,6 @@
 package org.trendwright.app;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
 import io.javalin.Javalin;
 import io.micrometer.core.instrument.binder.jvm.JvmMemoryMetrics;
 import io.micrometer.core.instrument.binder.system.UptimeMetrics;
@@ -7,11 +8,13 @@ import io.micrometer.prometheusmetrics.PrometheusConfig;
 import io.micrometer.prometheusmetrics.PrometheusMeterRegistry;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.time.Clock;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
+import java.util.function.Supplier;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.trendwright.api.HttpApi;
@@ -67,19 +70,26 @@ public final class TrendwrightApp implements AutoCloseable {
         return start(settings, TeamSettings.from(System.getenv()), clock);
     }
 
-    /** As {@link #start(Settings, Clock)} with the given sign-in settings. */
+    /**
+     * As {@link #start(Settings, Clock)} with the given sign-in settings. Three threads share the
+     * start-up: this one builds the HTTP server; one builds the JSON mapper and the metrics registry
+     * the server needs; one migrates the store and loads the demo data.
+     */
     public static TrendwrightApp start(Settings settings, TeamSettings team, Clock clock) {
+        CompletableFuture<HttpParts> parts = onOwnThread("trendwright-start-http", HttpParts::build);
         if (settings.usesEmbeddedStore()) {
             createDirectory(settings);
         }
         Database database = Database.connect(settings.jdbcUrl(), settings.databaseSchema(), settings.poolSize());
         TrendwrightApp app = null;
         try {
-            CompletableFuture<Void> ready = CompletableFuture.runAsync(() -> {
+            CompletableFuture<Void> ready = onOwnThread("trendwright-start-store", () -> {
                 database.migrate();
                 seed(settings, new SeriesRepository(database, clock));
+                LOG.info("event=store-ready jvmUptimeMs={} threadCpuMs={}", uptimeMs(), threadCpuMs());
+                return null;
             });
-            app = start(settings, team, database, clock, true, ready);
+            app = start(settings, team, database, clock, true, ready, parts.join());
             ready.join();
             return app.announceSetup();
         } catch (RuntimeException e) {
@@ -100,7 +110,32 @@ public final class TrendwrightApp implements AutoCloseable {
     /** As {@link #start(Settings, Database, Clock)} with the given sign-in settings. */
     public static TrendwrightApp start(Settings settings, TeamSettings team, Database database, Clock clock) {
         seed(settings, new SeriesRepository(database, clock));
-        return start(settings, team, database, clock, false, CompletableFuture.completedFuture(null)).announceSetup();
+        return start(settings, team, database, clock, false, CompletableFuture.completedFuture(null), HttpParts.build())
+                .announceSetup();
+    }
+
+    /**
+     * What the HTTP server needs besides the store: the JSON mapper and the metrics registry with
+     * the JVM's memory and uptime. Building them takes a few hundred milliseconds of class loading,
+     * so start-up does it beside the server's own set-up.
+     */
+    private record HttpParts(ObjectMapper mapper, PrometheusMeterRegistry registry) {
+
+        static HttpParts build() {
+            PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
+            new JvmMemoryMetrics().bindTo(registry);
+            new UptimeMetrics().bindTo(registry);
+            return new HttpParts(JsonMapping.create(), registry);
+        }
+    }
+
+    /** Runs {@code work} on a new thread of its own (the common pool has one thread on 2 cores). */
+    private static <T> CompletableFuture<T> onOwnThread(String name, Supplier<T> work) {
+        return CompletableFuture.supplyAsync(work, task -> {
+            Thread thread = new Thread(task, name);
+            thread.setDaemon(true);
+            thread.start();
+        });
     }
 
     private static void seed(Settings settings, SeriesRepository series) {
@@ -114,21 +149,18 @@ public final class TrendwrightApp implements AutoCloseable {
     }
 
     private static TrendwrightApp start(Settings settings, TeamSettings teamSettings, Database database, Clock clock,
-                                        boolean owns, CompletableFuture<?> ready) {
+                                        boolean owns, CompletableFuture<?> ready, HttpParts parts) {
         SeriesRepository series = new SeriesRepository(database, clock);
         HttpApi.Team team = team(database, clock, teamSettings);
         IntakeLimits limits = limits(settings);
-        PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
-        new JvmMemoryMetrics().bindTo(registry);
-        new UptimeMetrics().bindTo(registry);
         JobRepository jobs = new JobRepository(database, clock);
         HttpApi.Built built = HttpApi.create(new HttpApi.Services(series, new FitResultRepository(database, clock),
-                database::isReachable, registry, JsonMapping.create(), limits, settings.maxBodyBytes(),
+                database::isReachable, parts.registry(), parts.mapper(), limits, settings.maxBodyBytes(),
                 settings.shutdownGrace(), ready, settings.maxConcurrentFits(), settings.maxQueuedFits(), jobs), team);
         built.app().start(settings.host(), settings.port());
-        LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={}", settings.host(), built.app().port(),
-                database.dialect().name().toLowerCase(java.util.Locale.ROOT),
-                java.lang.management.ManagementFactory.getRuntimeMXBean().getUptime());
+        LOG.info("event=started url=http://{}:{} store={} jvmUptimeMs={} threadCpuMs={}", settings.host(),
+                built.app().port(), database.dialect().name().toLowerCase(java.util.Locale.ROOT), uptimeMs(),
+                threadCpuMs());
         // Workers start once the store is migrated; requests wait for the same moment.
         JobWorker worker = new JobWorker(jobs, series, settings.jobWorkers(), settings.jobLease(), ready);
         return new TrendwrightApp(built.app(), built.routes(), database, owns, team, settings.host(), worker);
@@ -152,6 +184,16 @@ public final class TrendwrightApp implements AutoCloseable {
             System.out.println(team.setupCode().announcement("http://" + host + ":" + server.port()));
         }
         return this;
+    }
+
+    /** Milliseconds since the JVM started, for the start-up events of the log. */
+    static long uptimeMs() {
+        return ManagementFactory.getRuntimeMXBean().getUptime();
+    }
+
+    /** CPU milliseconds the calling thread has used: what a start-up phase cost, whatever the load. */
+    static long threadCpuMs() {
+        return ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime() / 1_000_000;
     }
 
     private static void createDirectory(Settings settings) {

@@ -1,6 +1,5 @@
 package org.trendwright.store;
 
-import com.zaxxer.hikari.HikariConfig;
 import com.zaxxer.hikari.HikariDataSource;
 import java.sql.Connection;
 import java.sql.SQLException;
@@ -44,28 +43,32 @@ public final class Database implements AutoCloseable {
     }
 
     /**
-     * Opens the connection pool without migrating, so that start-up can run the migrations while
-     * the HTTP server starts; call {@link #migrate()} before the first query.
+     * Sets up the connection pool without migrating, so that start-up can run the migrations while
+     * the HTTP server starts; call {@link #migrate()} before the first query. The pool opens its
+     * first connection on the first request for one (normally the migration, off the start-up
+     * thread), and fails then, after at most 5 s, when the store cannot be reached.
      */
     public static Database connect(String jdbcUrl, String schema, int poolSize) {
         Dialect dialect = Dialect.of(jdbcUrl);
-        HikariConfig config = new HikariConfig();
-        config.setJdbcUrl(jdbcUrl);
-        config.setPoolName("trendwright-" + dialect.name().toLowerCase(java.util.Locale.ROOT));
-        config.setMaximumPoolSize(poolSize);
-        config.setMinimumIdle(1);
-        config.setConnectionTimeout(5_000);
-        config.setInitializationFailTimeout(5_000);
+        // The no-argument data source starts its pool lazily: loading the driver (for SQLite, also
+        // extracting its native library) and the first connection are not paid by the caller.
+        HikariDataSource pool = new HikariDataSource();
+        pool.setJdbcUrl(jdbcUrl);
+        pool.setPoolName("trendwright-" + dialect.name().toLowerCase(java.util.Locale.ROOT));
+        pool.setMaximumPoolSize(poolSize);
+        pool.setMinimumIdle(1);
+        pool.setConnectionTimeout(5_000);
+        pool.setInitializationFailTimeout(5_000);
         if (schema != null) {
-            config.setSchema(schema);
+            pool.setSchema(schema);
         }
         if (dialect == Dialect.SQLITE) {
-            config.addDataSourceProperty("journal_mode", "WAL");
-            config.addDataSourceProperty("foreign_keys", "true");
-            config.addDataSourceProperty("busy_timeout", "5000");
-            config.addDataSourceProperty("transaction_mode", "IMMEDIATE");
+            pool.addDataSourceProperty("journal_mode", "WAL");
+            pool.addDataSourceProperty("foreign_keys", "true");
+            pool.addDataSourceProperty("busy_timeout", "5000");
+            pool.addDataSourceProperty("transaction_mode", "IMMEDIATE");
         }
-        return new Database(new HikariDataSource(config), dialect, schema);
+        return new Database(pool, dialect, schema);
     }
 
     /** Brings the schema up to date with this dialect's Flyway migrations. */

@@ -23,13 +23,21 @@ public final class PasswordHasher {
     private static final Base64.Encoder B64 = Base64.getEncoder().withoutPadding();
     private static final Base64.Decoder B64D = Base64.getDecoder();
 
-    /** A stored hash of a password no one has, checked against when a username is unknown. */
-    private final String decoy = hash(Secrets.random(""));
+    /**
+     * What an unknown username is checked against: a PHC string with the same parameters, a random
+     * salt and random hash bytes. Checking a password against it costs one full Argon2id run, like a
+     * real stored hash, yet building it costs none (it used to be the hash of a random password,
+     * which spent an Argon2id run at every start-up for bytes no password could reproduce anyway).
+     */
+    private final String decoy = phc(Secrets.bytes(SALT_BYTES), Secrets.bytes(HASH_BYTES));
 
     /** The PHC string of a new salted Argon2id hash of {@code password}. */
     public String hash(String password) {
         byte[] salt = Secrets.bytes(SALT_BYTES);
-        byte[] hash = argon2(password, salt, MEMORY_KIB, ITERATIONS, LANES, HASH_BYTES);
+        return phc(salt, argon2(password, salt, MEMORY_KIB, ITERATIONS, LANES, HASH_BYTES));
+    }
+
+    private static String phc(byte[] salt, byte[] hash) {
         return "$argon2id$v=19$m=" + MEMORY_KIB + ",t=" + ITERATIONS + ",p=" + LANES + "$" + B64.encodeToString(salt)
                 + "$" + B64.encodeToString(hash);
     }
