@@ -16,7 +16,7 @@ code="fit-load-setup-$RANDOM$RANDOM"
 TRENDWRIGHT_SETUP_CODE=$code java -Xmx512m ${JAVA_OPTS:-} -jar "$here/../../../target/trendwright.jar" \
     --port="$port" --data-dir="$data" --no-demo-data > "$data/server.log" 2>&1 &
 server=$!
-trap 'kill $server 2>/dev/null; wait $server 2>/dev/null; rm -rf "$data"' EXIT
+trap 'kill $server 2>/dev/null || true; wait $server 2>/dev/null || true; rm -rf "$data"' EXIT
 base=http://127.0.0.1:$port
 for _ in $(seq 1 300); do
   curl -sf "$base/health" > /dev/null 2>&1 && break
