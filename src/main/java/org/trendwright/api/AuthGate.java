@@ -5,6 +5,7 @@ import io.javalin.http.Context;
 import io.javalin.http.HandlerType;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import org.trendwright.store.AuditRepository;
 import org.trendwright.store.MemberRepository;
 import org.trendwright.store.TokenRepository;
@@ -19,6 +20,10 @@ import org.trendwright.team.TeamSettings;
  * token in {@code Authorization: Bearer}, else the session cookie), checks the route's
  * {@link Access} rule (a route without one is refused), requires the CSRF token on writes made with
  * the cookie, and writes every successful write to the audit log. Thread-safe.
+ *
+ * <p>Routes that take a POST body only to compute an answer and store nothing
+ * ({@link #STORES_NOTHING}) are not writes for the audit log: there is no change to record, and a
+ * database write per request would cap their rate at what the store can commit.
  */
 final class AuthGate {
 
@@ -26,6 +31,9 @@ final class AuthGate {
     static final String CSRF_HEADER = "X-CSRF-Token";
     private static final String PRINCIPAL = "tw.principal";
     private static final String ROUTE = "tw.route";
+    /** POST routes that answer from the posted or stored data and change nothing. */
+    static final Set<String> STORES_NOTHING = Set.of("POST /api/fit", "POST /api/series/preview",
+            "POST /api/series/{id}/versions/{version}/comparison");
 
     private final MemberRepository members;
     private final TokenRepository tokens;
@@ -100,7 +108,8 @@ final class AuthGate {
     private void audit(Context ctx) {
         Principal principal = principal(ctx);
         String route = ctx.attribute(ROUTE);
-        if (principal == null || route == null || !isWrite(ctx) || ctx.statusCode() >= 400) {
+        if (principal == null || route == null || !isWrite(ctx) || STORES_NOTHING.contains(route)
+                || ctx.statusCode() >= 400) {
             return;
         }
         Map<String, String> target = new java.util.TreeMap<>(ctx.pathParamMap());

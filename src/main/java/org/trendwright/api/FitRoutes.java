@@ -40,7 +40,7 @@ final class FitRoutes {
     private void fitStored(Context ctx) {
         FitRequest request = uploads.body(ctx, FitRequest.class);
         SeriesVersion version = repository.version(SeriesRoutes.id(ctx), SeriesRoutes.number(ctx, "version"));
-        FitService.Answer answer = gate.run(() -> fits.stored(version, request));
+        FitService.Answer answer = gate.run(version.points().size(), () -> fits.stored(version, request));
         ctx.header("X-Trendwright-Cache", answer.cached() ? "hit" : "miss");
         ctx.header("ETag", ETags.of(version.seriesId(), version.version()));
         ctx.contentType("application/json").result(answer.json());
@@ -58,6 +58,7 @@ final class FitRoutes {
         SeriesInput named = new SeriesInput(input.name() == null ? POSTED_NAME : input.name(), input.where(),
                 input.changes());
         SeriesDraft draft = SeriesAssembly.create(named, options);
-        ctx.json(gate.run(() -> fits.stateless(draft.name(), draft.frequency(), draft.points(), fit)));
+        ctx.json(gate.run(draft.points().size(),
+                () -> fits.stateless(draft.name(), draft.frequency(), draft.points(), fit)));
     }
 }

@@ -1,6 +1,8 @@
 package org.trendwright.api;
 
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonSerializer;
 import com.fasterxml.jackson.databind.MapperFeature;
@@ -19,7 +21,11 @@ import java.io.IOException;
  *   <li>a non-finite number (NaN, +-Infinity, which the core reports for undefined statistics
  *       such as the F test of an intercept-only model) is written as null, never as a string;</li>
  *   <li>requests are read strictly: an unknown field, a string where a number belongs, or NaN as
- *       a token are refused with a 400 naming the field.</li>
+ *       a token are refused with a 400 naming the field;</li>
+ *   <li>doubles are written in their shortest decimal form that reads back as the same double
+ *       (Giulietti's Schubfach algorithm, as Double.toString from JDK 19 on) and read with correct
+ *       rounding (Lemire's fast_float algorithm), Jackson's fast double writer and parser: the
+ *       JDK 17 Double.toString took a fifth of the CPU time of a fit answer.</li>
  * </ul>
  * The mapper is thread-safe once built.
  */
@@ -41,6 +47,8 @@ public final class JsonMapping {
                 .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
                 .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
                 .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
+                .enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
+                .enable(StreamReadFeature.USE_FAST_DOUBLE_PARSER)
                 .build();
     }
 

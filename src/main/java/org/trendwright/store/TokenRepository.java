@@ -63,27 +63,43 @@ public final class TokenRepository {
         });
     }
 
-    /** The member and scope of a live token with this digest, marking it used now. */
+    /**
+     * How stale the recorded last use of a token may get: a use is written only when the recorded
+     * one is older than this (or absent), so a script sending many requests costs one write a
+     * minute instead of one per request, and "last used" is accurate to the minute.
+     */
+    static final long LAST_USE_RESOLUTION_MILLIS = 60_000;
+
+    /** The member and scope of a live token with this digest, marking it used now (to the minute). */
     public Optional<Holder> use(String tokenDigest) {
-        Optional<Holder> holder = jdbc.read("check a token", c -> {
+        long now = clock.millis();
+        Optional<Use> found = jdbc.read("check a token", c -> {
             try (PreparedStatement s = c.prepareStatement("SELECT m.id, m.username, m.role, m.created_at, t.scope, t.id"
-                    + " AS token_id FROM api_token t JOIN member m ON m.id = t.member_id WHERE t.token_hash = ? AND"
-                    + " t.revoked_at IS NULL")) {
+                    + " AS token_id, t.last_used_at FROM api_token t JOIN member m ON m.id = t.member_id"
+                    + " WHERE t.token_hash = ? AND t.revoked_at IS NULL")) {
                 s.setString(1, tokenDigest);
                 try (ResultSet rs = s.executeQuery()) {
-                    return rs.next() ? Optional.of(new Holder(MemberRepository.member(rs), Scope.of(rs.getString("scope")),
-                            rs.getLong("token_id"))) : Optional.empty();
+                    if (!rs.next()) {
+                        return Optional.empty();
+                    }
+                    long lastUsed = rs.getLong("last_used_at");
+                    boolean stale = rs.wasNull() || now - lastUsed >= LAST_USE_RESOLUTION_MILLIS;
+                    return Optional.of(new Use(new Holder(MemberRepository.member(rs), Scope.of(rs.getString("scope")),
+                            rs.getLong("token_id")), stale));
                 }
             }
         });
-        holder.ifPresent(h -> markUsed(h.tokenId()));
-        return holder;
+        found.filter(Use::stale).ifPresent(u -> markUsed(u.holder().tokenId(), now));
+        return found.map(Use::holder);
     }
 
-    private void markUsed(long id) {
+    private record Use(Holder holder, boolean stale) {
+    }
+
+    private void markUsed(long id, long now) {
         jdbc.transaction("mark a token used", c -> {
             try (PreparedStatement s = c.prepareStatement("UPDATE api_token SET last_used_at = ? WHERE id = ?")) {
-                s.setLong(1, clock.millis());
+                s.setLong(1, now);
                 s.setLong(2, id);
                 return s.executeUpdate();
             }

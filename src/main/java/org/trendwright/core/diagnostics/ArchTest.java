@@ -8,7 +8,7 @@ import org.trendwright.core.InvalidSpecificationException;
 import org.trendwright.core.TestResult;
 import org.trendwright.core.regression.Design;
 import org.trendwright.core.regression.LeastSquares;
-import org.trendwright.core.regression.OlsFit;
+import org.trendwright.core.regression.SumsOfSquares;
 
 /**
  * Engle's Lagrange-multiplier test for autoregressive conditional heteroskedasticity (ARCH) of order
@@ -50,7 +50,7 @@ public final class ArchTest {
         double[] squares = scaledSquares(residuals);
         double[] response = Arrays.copyOfRange(squares, order, n);
         requireVariation(response, order);
-        OlsFit auxiliary = LeastSquares.fit(auxiliaryDesign(squares, order), response);
+        SumsOfSquares auxiliary = LeastSquares.sumsOfSquares(auxiliaryDesign(squares, order), response);
         int rows = n - order;
         // Centred R^2 of a fit with an intercept is >= 0; rounding may leave it a hair below.
         double rSquared = Math.max(0, auxiliary.rSquared());

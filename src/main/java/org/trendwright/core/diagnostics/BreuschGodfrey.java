@@ -8,6 +8,7 @@ import org.trendwright.core.TestResult;
 import org.trendwright.core.regression.Design;
 import org.trendwright.core.regression.LeastSquares;
 import org.trendwright.core.regression.OlsFit;
+import org.trendwright.core.regression.SumsOfSquares;
 
 /**
  * The Breusch-Godfrey Lagrange-multiplier test for serial correlation of order p in regression
@@ -79,11 +80,11 @@ public final class BreuschGodfrey {
         double[] e = fit.residuals();
         ResidualAutocorrelations.requireUsable(e, k + order + 1, "The Breusch-Godfrey test");
         requireNonTrivialResiduals(fit);
-        OlsFit auxiliary = LeastSquares.fit(auxiliaryDesign(fit.design(), e, order), e);
+        SumsOfSquares auxiliary = LeastSquares.sumsOfSquares(auxiliaryDesign(fit.design(), e, order), e);
         double restricted = sumOfSquares(e);
         // Nested fits: RSS_u <= RSS_r exactly; rounding can put it a hair above when the lags explain
         // nothing, which would make LM and F slightly negative and their p-values NaN.
-        double unrestricted = Math.min(auxiliary.residualSumOfSquares(), restricted);
+        double unrestricted = Math.min(auxiliary.residual(), restricted);
         double rSquared = 1 - unrestricted / restricted;
         return new BreuschGodfreyResult(order, n, k, rSquared, restricted, unrestricted,
                 lagrangeMultiplier(n * rSquared, order, level),

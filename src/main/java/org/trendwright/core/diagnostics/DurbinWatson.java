@@ -54,8 +54,9 @@ public final class DurbinWatson {
      *
      * <ul>
      *   <li>Exact p-values for the fit's own design: P(d &lt;= d_obs) against positive and
-     *       P(d &gt;= d_obs) against negative correlation, under iid normal errors, from
-     *       {@link DurbinWatsonDistribution#forDesign}.</li>
+     *       P(d &gt;= d_obs) against negative correlation, under iid normal errors, from the
+     *       eigenvalues of the design's M A M ({@link DurbinWatsonSpectrum#forDesign}, which remembers
+     *       them for recently used designs; the observed d is never part of what is remembered).</li>
      *   <li>Verdict: positive correlation when P(d &lt;= d_obs) &lt; level, negative when
      *       P(d &gt;= d_obs) &lt; level, else none detected.</li>
      *   <li>Bounds dL, dU at 5%, 1% and at {@code level} for this n and k'
@@ -74,7 +75,7 @@ public final class DurbinWatson {
         checkResidualDegreesOfFreedom(design.rows(), design.width());
         checkNotExactFit(fit);
         double d = statistic(fit.residuals());
-        DurbinWatsonSpectrum spectrum = DurbinWatsonSpectrum.of(design);
+        DurbinWatsonSpectrum spectrum = DurbinWatsonSpectrum.forDesign(design);
         DurbinWatsonDistribution distribution = new DurbinWatsonDistribution(spectrum.eigenvalues());
         // One inversion serves both tails: integrate the smaller one (below the mean, P(d <= d_obs))
         // and take the other as its complement, which loses nothing since it is then above 1/2.

@@ -48,7 +48,8 @@ public record DurbinWatsonDistribution(double[] eigenvalues) {
     }
 
     /**
-     * The exact null distribution of d for the residuals of a least-squares fit on this design.
+     * The exact null distribution of d for the residuals of a least-squares fit on this design,
+     * computed afresh on every call ({@link DurbinWatson#test} uses the remembered spectra instead).
      *
      * @throws InsufficientDataException when n - k &lt; {@link DurbinWatson#MIN_RESIDUAL_DEGREES_OF_FREEDOM}
      */

@@ -1,6 +1,8 @@
 package org.trendwright.core.diagnostics;
 
 import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import org.trendwright.core.RankDeficientDesignException;
 import org.trendwright.core.regression.Design;
 
@@ -21,7 +23,8 @@ import org.trendwright.core.regression.Design;
  * j (2t + 1) mod 4n, so each entry is one table look-up and one multiply-add; the secular
  * stages are O(n^2) per regressor. A dense eigen-decomposition would be O(n^3).
  *
- * <p>Stateless and thread-safe.
+ * <p>{@link #forDesign} remembers the spectra of recently used designs (see {@link #REMEMBERED_DESIGNS});
+ * {@link #of} always computes. Thread-safe.
  *
  * @param eigenvalues   nu_1 &lt;= ... &lt;= nu_{n-k}
  * @param spansConstant true when the constant vector lies in the column space of X (an explicit
@@ -42,7 +45,65 @@ record DurbinWatsonSpectrum(double[] eigenvalues, boolean spansConstant) {
         return eigenvalues.clone();
     }
 
-    /** The spectrum for a full-rank design with n &gt; k. */
+    /**
+     * The spectrum is a pure function of the design (the regressors, never the response), and a
+     * service meets the same few designs again and again: every 120-quarter linear trend has the
+     * same columns, and the linear and log-linear trend of one series share theirs. So the
+     * {@value #REMEMBERED_DESIGNS} most recently used designs with at most
+     * {@value #REMEMBERED_VALUES} remembered numbers in all (the key's n k plus the n - k
+     * eigenvalues; about 8 MB) are kept. Keyed by the design itself (value equality over every
+     * column and name), so a hash collision cannot return another design's spectrum. Synchronized;
+     * a miss computes outside the lock, and two threads may both compute one design once, with
+     * identical results.
+     */
+    static final int REMEMBERED_DESIGNS = 64;
+    static final long REMEMBERED_VALUES = 1_000_000;
+
+    private static final Map<Design, DurbinWatsonSpectrum> REMEMBERED = new LinkedHashMap<>(16, 0.75f, true);
+    private static long rememberedValues;
+
+    /** {@link #of}, remembered per design as described at {@link #REMEMBERED_DESIGNS}. */
+    static DurbinWatsonSpectrum forDesign(Design design) {
+        synchronized (REMEMBERED) {
+            DurbinWatsonSpectrum remembered = REMEMBERED.get(design);
+            if (remembered != null) {
+                return remembered;
+            }
+        }
+        DurbinWatsonSpectrum computed = of(design);
+        remember(design, computed);
+        return computed;
+    }
+
+    private static void remember(Design design, DurbinWatsonSpectrum spectrum) {
+        long size = valuesHeld(design, spectrum);
+        if (size > REMEMBERED_VALUES) {
+            return;
+        }
+        synchronized (REMEMBERED) {
+            DurbinWatsonSpectrum previous = REMEMBERED.put(design, spectrum);
+            rememberedValues += size - (previous == null ? 0 : size);
+            var eldest = REMEMBERED.entrySet().iterator();
+            while (REMEMBERED.size() > REMEMBERED_DESIGNS || rememberedValues > REMEMBERED_VALUES) {
+                Map.Entry<Design, DurbinWatsonSpectrum> entry = eldest.next();
+                rememberedValues -= valuesHeld(entry.getKey(), entry.getValue());
+                eldest.remove();
+            }
+        }
+    }
+
+    private static long valuesHeld(Design design, DurbinWatsonSpectrum spectrum) {
+        return (long) design.rows() * design.width() + spectrum.eigenvalues.length;
+    }
+
+    /** How many designs are remembered now (for tests of the bound). */
+    static int rememberedDesigns() {
+        synchronized (REMEMBERED) {
+            return REMEMBERED.size();
+        }
+    }
+
+    /** The spectrum for a full-rank design with n &gt; k, computed afresh. */
     static DurbinWatsonSpectrum of(Design design) {
         int n = design.rows();
         int constant = constantColumn(design);

@@ -67,6 +67,38 @@ public final class LeastSquares {
      * @throws InvalidSpecificationException when y has the wrong length or a non-finite value
      */
     public static OlsFit fit(Design design, double[] y) {
+        Solved solved = solve(design, y);
+        ScaledDesign scaled = solved.scaled();
+        double[][] xtxInverse = scaled.unscaledInverse(GramInverse.refined(scaled.columns(), solved.qr()));
+        return summarize(design, y, fitted(scaled.columns(), solved.scaledB()), scaled.fitMagnitude(solved.scaledB()),
+                solved.residuals(), scaled.unscaled(solved.scaledB()), xtxInverse, conditionNumber(solved.unitR()));
+    }
+
+    /**
+     * The sums of squares that {@link #fit} would report for the same data, bit for bit (the same
+     * factorisation, refinement and double-double sums), without the inference: no (X'X)^-1,
+     * standard errors, t quantile or condition number. For auxiliary regressions such as those of
+     * the Breusch-Godfrey and ARCH tests, which use only RSS or R^2.
+     *
+     * @throws InsufficientDataException    when n <= k
+     * @throws RankDeficientDesignException as {@link #fit}
+     * @throws InvalidSpecificationException as {@link #fit}
+     */
+    public static SumsOfSquares sumsOfSquares(Design design, double[] y) {
+        Solved solved = solve(design, y);
+        double centre = design.hasIntercept() ? mean(y) : 0;
+        double rss = sumOfSquares(solved.residuals(), 0);
+        double tss = sumOfSquares(y, centre);
+        double[] fitted = fitted(solved.scaled().columns(), solved.scaledB());
+        return new SumsOfSquares(rss, tss, explainedSumOfSquares(fitted, centre, tss, rss,
+                solved.scaled().fitMagnitude(solved.scaledB())));
+    }
+
+    /** The refined solution on the scaled columns, with the residuals (exactly 0 for an exact fit). */
+    private record Solved(ScaledDesign scaled, PivotedQr qr, double[][] unitR, double[] scaledB, double[] residuals) {
+    }
+
+    private static Solved solve(Design design, double[] y) {
         int n = design.rows();
         int k = design.width();
         checkInput(design, y);
@@ -81,9 +113,7 @@ public final class LeastSquares {
         double[] scaledB = solution.coefficients();
         double[] residuals = isExactFit(scaled.columns(), y, scaledB, solution.residuals())
                 ? new double[n] : solution.residuals();
-        double[][] xtxInverse = scaled.unscaledInverse(GramInverse.refined(scaled.columns(), qr));
-        return summarize(design, y, fitted(scaled.columns(), scaledB), scaled.fitMagnitude(scaledB), residuals,
-                scaled.unscaled(scaledB), xtxInverse, conditionNumber(unitR));
+        return new Solved(scaled, qr, unitR, scaledB, residuals);
     }
 
     private static void checkInput(Design design, double[] y) {

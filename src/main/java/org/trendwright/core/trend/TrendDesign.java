@@ -26,9 +26,9 @@ record TrendDesign(TrendSpec spec, int periodsPerYear, int firstSeason) {
         return new TrendDesign(spec, series.periodsPerYear(), series.firstSeason());
     }
 
-    /** Number of regressors k. */
+    /** Number of regressors k: constant, t, t^2 for the quadratic shape, a dummy per season after the first. */
     int width() {
-        return names().size();
+        return 2 + (spec.shape() == TrendShape.QUADRATIC ? 1 : 0) + (spec.seasonalDummies() ? periodsPerYear - 1 : 0);
     }
 
     List<String> names() {
