@@ -28,7 +28,8 @@ record TrendDesign(TrendSpec spec, int periodsPerYear, int firstSeason) {
 
     /** Number of regressors k. */
     int width() {
-        return names().size();
+        // The size of names(), counted without building the names: row(t) asks for it at every row.
+        return 2 + (spec.shape() == TrendShape.QUADRATIC ? 1 : 0) + (spec.seasonalDummies() ? periodsPerYear - 1 : 0);
     }
 
     List<String> names() {
