@@ -30,6 +30,12 @@ import org.trendwright.core.TestResult;
  *       origins.</li>
  * </ol>
  *
+ * <p>Cost: each candidate is fitted in full once, on the whole series, for its residual checks and
+ * likelihood. Out of sample it is refitted once per training end (the holdout split and each
+ * origin; the holdout split is usually an origin too, and an origin's one-step forecast is the
+ * first of its forecasts), for its point forecasts only ({@link Candidate#pointForecasts}), which
+ * give the same numbers as the full fit's forecast without its intervals and inference.
+ *
  * <p>Stateless and thread-safe.
  */
 public final class ModelSelection {
