@@ -51,7 +51,7 @@ public final class SeriesVerdicts {
         CandidateAssessment chosen = comparison.candidates().stream().filter(a -> a.name().equals(name))
                 .findFirst().orElseThrow();
         Candidate model = candidates.stream().filter(c -> c.name().equals(name)).findFirst().orElseThrow();
-        double next = model.fit(series).forecast(1, List.of(0.95)).points().get(0).value();
+        double next = model.pointForecasts(series, 1)[0];
         SeriesScreening screens = SeriesScreens.screen(series, false, LEVEL);
         // The ADF null is a unit root: not rejecting it means one is present.
         Boolean unitRoot = screens.unitRoot().map(adf -> !adf.test().rejected()).orElse(null);

@@ -65,9 +65,14 @@ public record ArFit(Observations series, ArSpec spec, int order, int[] lags, Ols
 
     /** φ by lag from a regression whose coefficients are the constant followed by the given lags. */
     static double[] phiByLag(int[] lags, OlsFit regression) {
+        return phiByLag(lags, regression.estimates());
+    }
+
+    /** φ by lag from coefficients b0, then one per lag in the order given. */
+    static double[] phiByLag(int[] lags, double[] coefficients) {
         double[] phi = new double[lags.length == 0 ? 0 : lags[lags.length - 1]];
         for (int j = 0; j < lags.length; j++) {
-            phi[lags[j] - 1] = regression.coefficients().get(j + 1).estimate();
+            phi[lags[j] - 1] = coefficients[j + 1];
         }
         return phi;
     }

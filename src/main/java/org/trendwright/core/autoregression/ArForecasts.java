@@ -56,10 +56,10 @@ public final class ArForecasts {
     public static Forecast forecast(ArFit fit, int horizon, double... levels) {
         checkArguments(horizon, levels);
         double[] phi = fit.lagCoefficients();
-        double[] values = pointPath(fit.workingSeries(), fit.constant(), phi, horizon);
+        double[] values = pointValues(fit.workingSeries(), fit.constant(), phi, horizon, fit.differenced(),
+                fit.series().valueAt(fit.series().size() - 1));
         double[] psi = psiWeights(phi, horizon);
         if (fit.differenced()) {
-            values = integrate(values, fit.series().valueAt(fit.series().size() - 1));
             psi = integrate(psi, 0);
         }
         double sigma = fit.standardErrorOfEstimate();
@@ -90,6 +90,16 @@ public final class ArForecasts {
             psi[j] = sum;
         }
         return psi;
+    }
+
+    /**
+     * The point forecasts of steps 1..horizon: the chain rule on the working series w, integrated
+     * from the last level {@code lastLevel} when w holds first differences.
+     */
+    static double[] pointValues(double[] w, double constant, double[] phi, int horizon, boolean differenced,
+                                double lastLevel) {
+        double[] path = pointPath(w, constant, phi, horizon);
+        return differenced ? integrate(path, lastLevel) : path;
     }
 
     /** Chain-rule forecasts of the working series w for steps 1..horizon. */

@@ -40,6 +40,35 @@ public final class Autoregression {
      *         constant, as for a series that is constant after its start
      */
     public static ArFit fit(Observations series, ArSpec spec) {
+        Specified model = specify(series, spec);
+        OlsFit regression = LeastSquares.fit(model.design(), model.response());
+        List<CandidateOrder> candidates = spec.selection() == LagSelection.FIXED
+                ? List.of(new CandidateOrder(model.order(), regression.observations(), regression.aic(),
+                        regression.bic()))
+                : model.candidates();
+        return assemble(series, spec, model.order(), model.lags(), regression, candidates);
+    }
+
+    /**
+     * The point forecasts of h = 1..horizon that {@code ArForecasts.forecast(fit(series, spec), ...)}
+     * reports, from the same order choice and the same coefficients ({@link LeastSquares#estimates}),
+     * without the inference, residual autocorrelations and stationarity check of {@link #fit}. For
+     * callers that refit many times, such as the out-of-sample model comparison.
+     *
+     * @throws InvalidSpecificationException as {@link #fit}
+     * @throws InsufficientDataException as {@link #fit}
+     * @throws org.trendwright.core.RankDeficientDesignException as {@link #fit}
+     */
+    public static double[] pointForecasts(Observations series, ArSpec spec, int horizon) {
+        Specified model = specify(series, spec);
+        double[] b = LeastSquares.estimates(model.design(), model.response()).coefficients();
+        double[] phi = ArFit.phiByLag(model.lags(), b);
+        return ArForecasts.pointValues(model.working(), b[0], phi, horizon, spec.differenced(),
+                series.valueAt(series.size() - 1));
+    }
+
+    /** Checks the series, chooses the order and builds the regression of the chosen lags. */
+    private static Specified specify(Observations series, ArSpec spec) {
         LagDesigns.requireConsecutive(series, "An autoregression");
         int seasonal = seasonalLag(series, spec);
         double[] w = series.values();
@@ -54,12 +83,15 @@ public final class Autoregression {
         }
         int[] lags = lags(order, seasonal);
         int start = lags.length == 0 ? 0 : lags[lags.length - 1];
-        OlsFit regression = LeastSquares.fit(design(w, lags, start), LagDesigns.lagged(w, 0, start));
-        if (spec.selection() == LagSelection.FIXED) {
-            candidates = List.of(new CandidateOrder(order, regression.observations(), regression.aic(),
-                    regression.bic()));
-        }
-        return assemble(series, spec, order, lags, regression, candidates);
+        return new Specified(w, order, lags, design(w, lags, start), LagDesigns.lagged(w, 0, start), candidates);
+    }
+
+    /**
+     * An autoregression ready to fit: the working series (levels or differences), the chosen
+     * order and its lags, the regression's design and response, and the orders compared.
+     */
+    private record Specified(double[] working, int order, int[] lags, Design design, double[] response,
+                             List<CandidateOrder> candidates) {
     }
 
     private static ArFit assemble(Observations series, ArSpec spec, int order, int[] lags, OlsFit regression,

@@ -72,19 +72,39 @@ public final class Ar1Gls {
      *                                       are linearly dependent
      */
     public static Ar1GlsFit fit(Design design, double[] y, Ar1Method method, double tolerance, int maxIterations) {
+        Ar1GlsEstimate estimate = estimate(design, y, method, tolerance, maxIterations);
+        double rho = estimate.rho().value();
+        OlsFit transformed = LeastSquares.fit(transform(design, rho, method), transform(y, rho, method));
+        return result(estimate, transformed, design);
+    }
+
+    /**
+     * The iteration of {@link #fit} without the inference of its final transformed regression:
+     * each transformed regression is solved by {@link LeastSquares#estimates}, which gives the
+     * very coefficients {@link LeastSquares#fit} gives, so rho, the iteration count and b are
+     * those of {@link #fit}. For callers that need point forecasts only.
+     *
+     * @throws InsufficientDataException     as {@link #fit}
+     * @throws InvalidSpecificationException as {@link #fit}
+     * @throws org.trendwright.core.RankDeficientDesignException as {@link #fit}
+     */
+    public static Ar1GlsEstimate estimate(Design design, double[] y, Ar1Method method, double tolerance,
+                                          int maxIterations) {
         checkOptions(tolerance, maxIterations);
         checkSize(design, method);
-        OlsFit ols = LeastSquares.fit(design, y);
+        LeastSquares.Estimates ols = LeastSquares.estimates(design, y);
         checkNoise(ols, y);
         RhoEstimate rho = stationary(RhoEstimate.fromResiduals(ols.residuals()), 0);
         for (int iteration = 1; ; iteration++) {
-            OlsFit transformed = LeastSquares.fit(transform(design, rho.value(), method),
+            LeastSquares.Estimates transformed = LeastSquares.estimates(transform(design, rho.value(), method),
                     transform(y, rho.value(), method));
-            double[] structural = structuralResiduals(design, y, transformed.estimates());
+            double[] b = transformed.coefficients();
+            double[] structural = structuralResiduals(design, y, b);
             RhoEstimate next = RhoEstimate.fromResiduals(structural);
             boolean converged = Math.abs(next.value() - rho.value()) < tolerance;
             if (converged || iteration == maxIterations) {
-                return result(method, rho, iteration, converged, transformed, structural, design);
+                return new Ar1GlsEstimate(method, rho, iteration, converged, b, structural,
+                        transformed.residuals());
             }
             rho = stationary(next, iteration);
         }
@@ -111,7 +131,7 @@ public final class Ar1Gls {
      * EXACT_FIT^2 times sum y^2, i.e. residuals about 1e-12 of the data), whose correlation means
      * nothing.
      */
-    private static void checkNoise(OlsFit ols, double[] y) {
+    private static void checkNoise(LeastSquares.Estimates ols, double[] y) {
         double squares = 0;
         for (double v : y) {
             squares += v * v;
@@ -172,8 +192,7 @@ public final class Ar1Gls {
         return u;
     }
 
-    private static Ar1GlsFit result(Ar1Method method, RhoEstimate rho, int iterations, boolean converged,
-                                    OlsFit transformed, double[] structural, Design design) {
+    private static Ar1GlsFit result(Ar1GlsEstimate estimate, OlsFit transformed, Design design) {
         double[][] covariance = transformed.xtxInverse();
         double variance = transformed.residualVariance();
         for (double[] row : covariance) {
@@ -185,8 +204,9 @@ public final class Ar1Gls {
         for (int j = 0; j < last.length; j++) {
             last[j] = design.get(design.rows() - 1, j);
         }
-        return new Ar1GlsFit(method, rho, iterations, converged, transformed.coefficients(), covariance,
-                transformed.standardErrorOfEstimate(), transformed.residualDegreesOfFreedom(),
-                DurbinWatson.statistic(transformed.residuals()), structural, transformed.residuals(), last);
+        return new Ar1GlsFit(estimate.method(), estimate.rho(), estimate.iterations(), estimate.converged(),
+                transformed.coefficients(), covariance, transformed.standardErrorOfEstimate(),
+                transformed.residualDegreesOfFreedom(), DurbinWatson.statistic(transformed.residuals()),
+                estimate.structuralResiduals(), transformed.residuals(), last);
     }
 }

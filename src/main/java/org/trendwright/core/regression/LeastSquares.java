@@ -116,6 +116,75 @@ public final class LeastSquares {
         return new Solved(scaled, qr, unitR, scaledB, residuals);
     }
 
+    /**
+     * The coefficients and residuals of {@link #fit} alone, computed by the very same steps (same
+     * checks, scaling, pivoted QR and refinement, so the numbers are identical), without the
+     * inference and summaries: no (X'X)^-1, condition number, t or F probabilities. For callers
+     * that refit many times and need only the point estimates, such as out-of-sample forecasts.
+     * Immutable.
+     *
+     * @throws InsufficientDataException    as {@link #fit}
+     * @throws RankDeficientDesignException as {@link #fit}
+     * @throws InvalidSpecificationException as {@link #fit}
+     */
+    public static Estimates estimates(Design design, double[] y) {
+        int n = design.rows();
+        int k = design.width();
+        checkInput(design, y);
+        if (n <= k) {
+            throw InsufficientDataException.forModel("A regression on " + k + " regressors", k + 1, n);
+        }
+        ScaledDesign scaled = ScaledDesign.of(design);
+        PivotedQr qr = PivotedQr.factor(scaled.columns());
+        scaled.checkRank(scaled.unitLengthR(qr));
+        AugmentedRefinement.Solution solution = AugmentedRefinement.solve(scaled.columns(), qr, y);
+        double[] scaledB = solution.coefficients();
+        double[] residuals = isExactFit(scaled.columns(), y, scaledB, solution.residuals())
+                ? new double[n] : solution.residuals();
+        return new Estimates(scaled.unscaled(scaledB), residuals, sumOfSquares(residuals, 0), n - k);
+    }
+
+    /**
+     * The point estimates of a least-squares fit, equal to those {@link #fit} reports.
+     *
+     * @param coefficients              b, in the design's column order
+     * @param residuals                 y - X b as {@link OlsFit#residuals()}
+     * @param residualSumOfSquares      as {@link OlsFit#residualSumOfSquares()}
+     * @param residualDegreesOfFreedom  n - k
+     */
+    public record Estimates(double[] coefficients, double[] residuals, double residualSumOfSquares,
+                            int residualDegreesOfFreedom) {
+
+        public Estimates {
+            coefficients = coefficients.clone();
+            residuals = residuals.clone();
+        }
+
+        @Override
+        public double[] coefficients() {
+            return coefficients.clone();
+        }
+
+        @Override
+        public double[] residuals() {
+            return residuals.clone();
+        }
+
+        /** s^2 = RSS / (n - k), as {@link OlsFit#residualVariance()}. */
+        public double residualVariance() {
+            return residualSumOfSquares / residualDegreesOfFreedom;
+        }
+
+        /** The point prediction x'b, summed as {@link OlsFit#predict}. */
+        public double predict(double[] x) {
+            double sum = 0;
+            for (int j = 0; j < coefficients.length; j++) {
+                sum += x[j] * coefficients[j];
+            }
+            return sum;
+        }
+    }
+
     private static void checkInput(Design design, double[] y) {
         if (y.length != design.rows()) {
             throw new InvalidSpecificationException("The response has " + y.length + " values but the design has "

@@ -40,6 +40,12 @@ public record ArCandidate(ArSpec spec, double level) implements Candidate {
         return new Fitted(Autoregression.fit(training, spec), level);
     }
 
+    /** The chain-rule point forecasts alone ({@link Autoregression#pointForecasts}). */
+    @Override
+    public double[] pointForecasts(Observations training, int horizon) {
+        return Autoregression.pointForecasts(training, spec, horizon);
+    }
+
     private record Fitted(ArFit fit, double level) implements CandidateFit {
 
         @Override

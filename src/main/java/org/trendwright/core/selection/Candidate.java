@@ -1,6 +1,8 @@
 package org.trendwright.core.selection;
 
+import java.util.List;
 import org.trendwright.core.Observations;
+import org.trendwright.core.forecast.ForecastPoint;
 
 /**
  * A model that can be fitted to a training series and forecast from it: the unit that the model
@@ -14,4 +16,16 @@ public interface Candidate {
 
     /** Fits the model to {@code training}; throws a ModelException when the data cannot support it. */
     CandidateFit fit(Observations training);
+
+    /**
+     * The point forecasts of the {@code horizon} periods after {@code training}: the values of
+     * {@code fit(training).forecast(horizon, levels)}, which do not depend on the levels. The
+     * comparison refits at every forecast origin and scores only these values, so an
+     * implementation may compute them without the intervals, inference and residual checks of a
+     * full fit, but must give the same numbers.
+     */
+    default double[] pointForecasts(Observations training, int horizon) {
+        return fit(training).forecast(horizon, List.of(0.95)).points().stream().mapToDouble(ForecastPoint::value)
+                .toArray();
+    }
 }

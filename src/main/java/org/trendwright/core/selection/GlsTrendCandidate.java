@@ -8,9 +8,12 @@ import org.trendwright.core.analysis.GlsTrendForecast;
 import org.trendwright.core.diagnostics.LjungBox;
 import org.trendwright.core.forecast.Forecast;
 import org.trendwright.core.gls.Ar1Gls;
+import org.trendwright.core.gls.Ar1GlsEstimate;
 import org.trendwright.core.gls.Ar1GlsFit;
 import org.trendwright.core.gls.Ar1Method;
+import org.trendwright.core.trend.BackTransformed;
 import org.trendwright.core.trend.TrendFit;
+import org.trendwright.core.trend.TrendRegression;
 import org.trendwright.core.trend.TrendSpec;
 import org.trendwright.core.trend.Trends;
 
@@ -35,6 +38,32 @@ public record GlsTrendCandidate(TrendSpec trend, double level) implements Candid
         Ar1GlsFit gls = Ar1Gls.fit(ols.ols().design(), ols.ols().y(), Ar1Method.PRAIS_WINSTEN,
                 Ar1Gls.DEFAULT_TOLERANCE, Ar1Gls.DEFAULT_MAX_ITERATIONS);
         return new Fitted(ols, gls, level);
+    }
+
+    /**
+     * The GLS point forecasts alone: the same iteration ({@link Ar1Gls#estimate}) and the values
+     * x'b + rho^h u_n of {@link GlsTrendForecast}, for a log-scale model e^(x'b + rho^h u_n) times
+     * Duan's smearing factor of the GLS innovations.
+     */
+    @Override
+    public double[] pointForecasts(Observations training, int horizon) {
+        TrendRegression regression = TrendRegression.of(training, trend);
+        Ar1GlsEstimate gls = Ar1Gls.estimate(regression.design(), regression.response(), Ar1Method.PRAIS_WINSTEN,
+                Ar1Gls.DEFAULT_TOLERANCE, Ar1Gls.DEFAULT_MAX_ITERATIONS);
+        double[][] rows = new double[horizon][];
+        int[] times = new int[horizon];
+        for (int h = 1; h <= horizon; h++) {
+            times[h - 1] = training.lastTime() + h;
+            rows[h - 1] = regression.regressorsAt(times[h - 1]);
+        }
+        double[] values = gls.pointForecasts(rows, times);
+        if (trend.logScale()) {
+            double smearing = BackTransformed.smearingFactor(gls.transformedResiduals());
+            for (int i = 0; i < values.length; i++) {
+                values[i] = Math.exp(values[i]) * smearing;
+            }
+        }
+        return values;
     }
 
     private record Fitted(TrendFit ols, Ar1GlsFit gls, double level) implements CandidateFit {

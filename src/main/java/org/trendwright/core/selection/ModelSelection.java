@@ -2,14 +2,14 @@ package org.trendwright.core.selection;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.ModelException;
 import org.trendwright.core.Observations;
 import org.trendwright.core.TestResult;
-import org.trendwright.core.forecast.Forecast;
-import org.trendwright.core.forecast.ForecastPoint;
 
 /**
  * Honest model choice: every candidate is judged on periods it was not fitted to.
@@ -29,6 +29,12 @@ import org.trendwright.core.forecast.ForecastPoint;
  *   <li><b>Diebold-Mariano</b> between the two best candidates' one-step errors at the rolling
  *       origins.</li>
  * </ol>
+ *
+ * <p>Cost: each candidate is fitted in full once, on the whole series, for its residual checks and
+ * likelihood. Out of sample it is refitted once per training end (the holdout split and each
+ * origin; the holdout split is usually an origin too, and an origin's one-step forecast is the
+ * first of its forecasts), for its point forecasts only ({@link Candidate#pointForecasts}), which
+ * give the same numbers as the full fit's forecast without its intervals and inference.
  *
  * <p>Stateless and thread-safe.
  */
@@ -60,56 +66,86 @@ public final class ModelSelection {
             boolean passes = checks.stream().noneMatch(c -> c.pValue() < spec.level());
             int k = full.parameters();
             double ll = full.logLikelihood();
+            Map<Integer, double[]> forecasts = forecastsByEnd(series, candidate, spec);
             return new CandidateAssessment(candidate.name(), Optional.empty(), -2 * ll + 2 * k,
                     -2 * ll + Math.log(full.observationsUsed()) * k, full.observationsUsed(),
-                    Optional.of(holdout(series, candidate, spec)), Optional.of(rollingOrigin(series, candidate, spec)),
-                    oneStepErrors(series, candidate, spec), checks, passes);
+                    Optional.of(holdout(series, forecasts, spec)), Optional.of(rollingOrigin(series, forecasts, spec)),
+                    oneStepErrors(series, forecasts, spec), checks, passes);
         } catch (ModelException e) {
             return CandidateAssessment.failed(candidate.name(), e.getMessage());
         }
     }
 
-    private static AccuracyMeasures holdout(Observations series, Candidate candidate, ComparisonSpec spec) {
-        Observations training = series.head(series.size() - spec.holdout());
-        Errors errors = forecastErrors(series, training, candidate, spec, spec.holdout());
-        return AccuracyMeasures.of(errors.actual(), errors.forecast(), AccuracyMeasures.seasonalNaiveScale(training));
+    /**
+     * The candidate's point forecasts from each training end the comparison uses (the holdout's,
+     * then each rolling origin's), up to {@code holdout} observations ahead. Each end is fitted
+     * once: the holdout split is often one of the origins, and an origin's one-step forecast is
+     * the first of its forecasts (a point forecast does not depend on how far the forecast runs).
+     */
+    private static Map<Integer, double[]> forecastsByEnd(Observations series, Candidate candidate,
+                                                         ComparisonSpec spec) {
+        Map<Integer, double[]> byEnd = new HashMap<>();
+        byEnd.put(series.size() - spec.holdout(), forecastFrom(series, series.size() - spec.holdout(), candidate,
+                spec.holdout()));
+        for (int end = series.size() - spec.origins(); end < series.size(); end++) {
+            if (!byEnd.containsKey(end)) {
+                byEnd.put(end, forecastFrom(series, end, candidate, spec.holdout()));
+            }
+        }
+        return byEnd;
     }
 
-    private static AccuracyMeasures rollingOrigin(Observations series, Candidate candidate, ComparisonSpec spec) {
+    /**
+     * Fits to the first {@code end} observations and forecasts through the observed periods after
+     * them, up to {@code steps} observations ahead (a gap in the series is forecast through).
+     */
+    private static double[] forecastFrom(Observations series, int end, Candidate candidate, int steps) {
+        Observations training = series.head(end);
+        int last = Math.min(series.size(), end + steps);
+        return candidate.pointForecasts(training, series.timeAt(last - 1) - training.lastTime());
+    }
+
+    private static AccuracyMeasures holdout(Observations series, Map<Integer, double[]> forecasts,
+                                            ComparisonSpec spec) {
+        int end = series.size() - spec.holdout();
+        Errors errors = errors(series, end, forecasts.get(end), spec.holdout());
+        return AccuracyMeasures.of(errors.actual(), errors.forecast(), AccuracyMeasures.seasonalNaiveScale(
+                series.head(end)));
+    }
+
+    private static AccuracyMeasures rollingOrigin(Observations series, Map<Integer, double[]> forecasts,
+                                                  ComparisonSpec spec) {
         Errors pooled = new Errors(new double[0], new double[0]);
         double scale = AccuracyMeasures.seasonalNaiveScale(series.head(series.size() - spec.origins()));
         for (int end = series.size() - spec.origins(); end < series.size(); end++) {
-            pooled = pooled.append(forecastErrors(series, series.head(end), candidate, spec, spec.holdout()));
+            pooled = pooled.append(errors(series, end, forecasts.get(end), spec.holdout()));
         }
         return AccuracyMeasures.of(pooled.actual(), pooled.forecast(), scale);
     }
 
-    private static double[] oneStepErrors(Observations series, Candidate candidate, ComparisonSpec spec) {
+    private static double[] oneStepErrors(Observations series, Map<Integer, double[]> forecasts,
+                                          ComparisonSpec spec) {
         double[] errors = new double[spec.origins()];
         for (int o = 0; o < spec.origins(); o++) {
             int end = series.size() - spec.origins() + o;
-            Errors e = forecastErrors(series, series.head(end), candidate, spec, 1);
+            Errors e = errors(series, end, forecasts.get(end), 1);
             errors[o] = e.actual()[0] - e.forecast()[0];
         }
         return errors;
     }
 
     /**
-     * Fits to {@code training} and forecasts the observed periods after it, up to {@code steps}
-     * observations ahead (a gap in the series is forecast through, not scored).
+     * The observed values after the first {@code end} observations, up to {@code steps} of them,
+     * beside the forecasts of their periods ({@code forecast[h - 1]} for h periods ahead).
      */
-    private static Errors forecastErrors(Observations series, Observations training, Candidate candidate,
-                                         ComparisonSpec spec, int steps) {
-        int first = training.size();
-        int last = Math.min(series.size(), first + steps);
-        int horizon = series.timeAt(last - 1) - training.lastTime();
-        Forecast forecast = candidate.fit(training).forecast(horizon, spec.levels());
-        double[] actual = new double[last - first];
-        double[] predicted = new double[last - first];
-        for (int i = first; i < last; i++) {
-            ForecastPoint point = forecast.points().get(series.timeAt(i) - training.lastTime() - 1);
-            actual[i - first] = series.valueAt(i);
-            predicted[i - first] = point.value();
+    private static Errors errors(Observations series, int end, double[] forecast, int steps) {
+        int last = Math.min(series.size(), end + steps);
+        int lastTrainingTime = series.timeAt(end - 1);
+        double[] actual = new double[last - end];
+        double[] predicted = new double[last - end];
+        for (int i = end; i < last; i++) {
+            actual[i - end] = series.valueAt(i);
+            predicted[i - end] = forecast[series.timeAt(i) - lastTrainingTime - 1];
         }
         return new Errors(actual, predicted);
     }

@@ -6,6 +6,7 @@ import org.trendwright.core.Observations;
 import org.trendwright.core.TestResult;
 import org.trendwright.core.forecast.Forecast;
 import org.trendwright.core.trend.TrendFit;
+import org.trendwright.core.trend.TrendRegression;
 import org.trendwright.core.trend.TrendSpec;
 import org.trendwright.core.trend.Trends;
 
@@ -27,6 +28,12 @@ public record TrendCandidate(TrendSpec spec, Function<TrendFit, List<TestResult>
     public CandidateFit fit(Observations training) {
         TrendFit fit = Trends.fit(training, spec);
         return new Fitted(fit, residualChecks);
+    }
+
+    /** The least-squares point forecasts alone ({@link TrendRegression#pointForecasts}). */
+    @Override
+    public double[] pointForecasts(Observations training, int horizon) {
+        return TrendRegression.of(training, spec).pointForecasts(horizon);
     }
 
     private record Fitted(TrendFit fit, Function<TrendFit, List<TestResult>> checks) implements CandidateFit {

@@ -68,7 +68,7 @@ public final class Trends {
         return new TrendFit(spec, series, ols, growth, smearing, fitted, back);
     }
 
-    private static double[] logValues(Observations series) {
+    static double[] logValues(Observations series) {
         double[] logs = new double[series.size()];
         for (int i = 0; i < logs.length; i++) {
             double v = series.valueAt(i);

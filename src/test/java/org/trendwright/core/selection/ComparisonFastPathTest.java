@@ -1,0 +1,248 @@
+package org.trendwright.core.selection;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.trendwright.core.Observations;
+import org.trendwright.core.TestResult;
+import org.trendwright.core.forecast.Forecast;
+
+/**
+ * The comparison refits each candidate once per training end and takes the point forecasts alone
+ * ({@link Candidate#pointForecasts}); the straightforward way fits every candidate in full for
+ * every split (the holdout, each rolling origin, each origin again for its one-step error) and
+ * reads the values off the full forecast. Both must give the same comparison: the same
+ * recommendation and every metric equal to 1e-9 relative (the fast path runs the same arithmetic,
+ * so the agreement is in fact exact; 1e-9 leaves room for a change of rounding order elsewhere).
+ *
+ * <p>The series are seeded simulations of the shapes the service meets: random walks with drift
+ * (the batch benchmark's), a trend with seasons and AR(1) noise (the JMH benchmark's), exponential
+ * growth with multiplicative noise (log models), monthly data (a 12-period holdout that is not a
+ * rolling origin) and a quarterly series with a missing period (forecasts through the gap).
+ */
+class ComparisonFastPathTest {
+
+    private static final double RELATIVE = 1e-9;
+
+    @Test
+    void the_fast_comparison_matches_full_fits_at_every_split_on_seeded_series() {
+        for (Observations series : seededSeries()) {
+            ComparisonSpec spec = ComparisonSpec.defaultsFor(series.periodsPerYear());
+            List<Candidate> candidates = StandardCandidates.forSeries(series, spec.level());
+            ModelComparison fast = ModelSelection.compare(series, candidates, spec);
+            List<CandidateAssessment> reference = new ArrayList<>();
+            for (Candidate candidate : candidates) {
+                reference.add(StraightforwardComparison.assess(series, candidate, spec));
+            }
+            assertEquals(StraightforwardComparison.recommended(reference), fast.recommended());
+            for (CandidateAssessment expected : reference) {
+                CandidateAssessment actual = fast.candidates().stream().filter(a -> a.name().equals(expected.name()))
+                        .findFirst().orElseThrow();
+                assertSame(expected, actual);
+            }
+        }
+    }
+
+    @Test
+    void every_candidates_point_forecasts_are_those_of_its_full_fit() {
+        for (Observations series : seededSeries()) {
+            for (Candidate candidate : StandardCandidates.forSeries(series, 0.05)) {
+                Observations training = series.head(series.size() - 3);
+                double[] fast = candidate.pointForecasts(training, 6);
+                Forecast full = candidate.fit(training).forecast(6, List.of(0.8, 0.95));
+                for (int h = 1; h <= 6; h++) {
+                    assertClose(full.points().get(h - 1).value(), fast[h - 1], candidate.name() + " h=" + h);
+                }
+            }
+        }
+    }
+
+    private static void assertSame(CandidateAssessment expected, CandidateAssessment actual) {
+        String name = expected.name();
+        assertEquals(expected.failure(), actual.failure(), name);
+        assertEquals(expected.evaluated(), actual.evaluated(), name);
+        if (!expected.evaluated()) {
+            return;
+        }
+        assertClose(expected.aic(), actual.aic(), name + " AIC");
+        assertClose(expected.bic(), actual.bic(), name + " BIC");
+        assertEquals(expected.observationsUsed(), actual.observationsUsed(), name);
+        assertMeasures(expected.holdout().orElseThrow(), actual.holdout().orElseThrow(), name + " holdout");
+        assertMeasures(expected.rollingOrigin().orElseThrow(), actual.rollingOrigin().orElseThrow(),
+                name + " rolling origin");
+        double[] e = expected.oneStepErrors();
+        double[] a = actual.oneStepErrors();
+        assertEquals(e.length, a.length, name);
+        for (int i = 0; i < e.length; i++) {
+            assertClose(e[i], a[i], name + " one-step error " + i);
+        }
+        assertEquals(expected.residualChecks().size(), actual.residualChecks().size(), name);
+        for (int i = 0; i < expected.residualChecks().size(); i++) {
+            TestResult te = expected.residualChecks().get(i);
+            TestResult ta = actual.residualChecks().get(i);
+            assertEquals(te.test(), ta.test(), name);
+            assertClose(te.pValue(), ta.pValue(), name + " " + te.test());
+        }
+        assertEquals(expected.passesChecks(), actual.passesChecks(), name);
+    }
+
+    private static void assertMeasures(AccuracyMeasures expected, AccuracyMeasures actual, String what) {
+        assertEquals(expected.forecasts(), actual.forecasts(), what);
+        assertClose(expected.rmse(), actual.rmse(), what + " RMSE");
+        assertClose(expected.mae(), actual.mae(), what + " MAE");
+        assertOptionalClose(expected.mape(), actual.mape(), what + " MAPE");
+        assertOptionalClose(expected.mase(), actual.mase(), what + " MASE");
+    }
+
+    private static void assertOptionalClose(Optional<Double> expected, Optional<Double> actual, String what) {
+        assertEquals(expected.isPresent(), actual.isPresent(), what);
+        expected.ifPresent(e -> assertClose(e, actual.orElseThrow(), what));
+    }
+
+    private static void assertClose(double expected, double actual, String what) {
+        if (Double.isNaN(expected) || Double.isNaN(actual) || expected == actual) {
+            assertEquals(expected, actual, what);
+            return;
+        }
+        double scale = Math.max(Math.abs(expected), Math.abs(actual));
+        assertTrue(Math.abs(expected - actual) <= RELATIVE * scale,
+                what + ": expected " + expected + " but the fast path gave " + actual);
+    }
+
+    /** Seeded series; the seeds are arbitrary and fixed. */
+    private static List<Observations> seededSeries() {
+        List<Observations> series = new ArrayList<>();
+        Random random = new Random(20261202);
+        for (int s = 0; s < 6; s++) {
+            series.add(Observations.consecutive(randomWalk(random, 80), 4, 1));
+        }
+        series.add(Observations.consecutive(seasonalAr1(random, 120), 4, 1));
+        series.add(Observations.consecutive(exponential(random, 60), 4, 2));
+        series.add(Observations.consecutive(seasonalAr1(random, 96), 12, 1));
+        series.add(withGap(randomWalk(random, 60)));
+        return series;
+    }
+
+    private static double[] randomWalk(Random random, int n) {
+        double[] y = new double[n];
+        double level = 100;
+        for (int t = 0; t < n; t++) {
+            level += 0.5 + random.nextGaussian();
+            y[t] = level;
+        }
+        return y;
+    }
+
+    private static double[] seasonalAr1(Random random, int n) {
+        double[] seasons = {0, 12, -6, 20};
+        double[] y = new double[n];
+        double u = 0;
+        for (int t = 1; t <= n; t++) {
+            u = 0.5 * u + random.nextGaussian();
+            y[t - 1] = 400 + 3 * t + seasons[(t - 1) % 4] + 8 * u;
+        }
+        return y;
+    }
+
+    private static double[] exponential(Random random, int n) {
+        double[] y = new double[n];
+        for (int t = 1; t <= n; t++) {
+            y[t - 1] = 100 * Math.pow(1.04, t) * Math.exp(0.03 * random.nextGaussian());
+        }
+        return y;
+    }
+
+    /** Quarterly, with period t = 40 missing. */
+    private static Observations withGap(double[] values) {
+        int[] times = new int[values.length - 1];
+        double[] kept = new double[values.length - 1];
+        for (int i = 0, j = 0; i < values.length; i++) {
+            if (i + 1 != 40) {
+                times[j] = i + 1;
+                kept[j++] = values[i];
+            }
+        }
+        return new Observations(times, kept, 4, 1);
+    }
+
+    /**
+     * The comparison as ModelSelection computed it before the fast path (commit 60a12a8): a full
+     * fit for every split and every origin, the values read off the full forecast.
+     */
+    private static final class StraightforwardComparison {
+
+        static CandidateAssessment assess(Observations series, Candidate candidate, ComparisonSpec spec) {
+            try {
+                CandidateFit full = candidate.fit(series);
+                List<TestResult> checks = full.residualChecks();
+                boolean passes = checks.stream().noneMatch(c -> c.pValue() < spec.level());
+                int k = full.parameters();
+                double ll = full.logLikelihood();
+                return new CandidateAssessment(candidate.name(), Optional.empty(), -2 * ll + 2 * k,
+                        -2 * ll + Math.log(full.observationsUsed()) * k, full.observationsUsed(),
+                        Optional.of(holdout(series, candidate, spec)), Optional.of(rolling(series, candidate, spec)),
+                        oneStepErrors(series, candidate, spec), checks, passes);
+            } catch (org.trendwright.core.ModelException e) {
+                return CandidateAssessment.failed(candidate.name(), e.getMessage());
+            }
+        }
+
+        /** Best rolling-origin RMSE among the candidates that pass their checks, else the best. */
+        static Optional<String> recommended(List<CandidateAssessment> assessments) {
+            List<CandidateAssessment> ranked = assessments.stream().filter(CandidateAssessment::evaluated)
+                    .sorted(java.util.Comparator.comparingDouble(a -> a.rollingOrigin().orElseThrow().rmse()))
+                    .toList();
+            return ranked.stream().filter(CandidateAssessment::passesChecks).findFirst()
+                    .or(() -> ranked.stream().findFirst()).map(CandidateAssessment::name);
+        }
+
+        private static AccuracyMeasures holdout(Observations series, Candidate candidate, ComparisonSpec spec) {
+            Observations training = series.head(series.size() - spec.holdout());
+            double[][] errors = errors(series, training, candidate, spec, spec.holdout());
+            return AccuracyMeasures.of(errors[0], errors[1], AccuracyMeasures.seasonalNaiveScale(training));
+        }
+
+        private static AccuracyMeasures rolling(Observations series, Candidate candidate, ComparisonSpec spec) {
+            List<Double> actual = new ArrayList<>();
+            List<Double> forecast = new ArrayList<>();
+            for (int end = series.size() - spec.origins(); end < series.size(); end++) {
+                double[][] errors = errors(series, series.head(end), candidate, spec, spec.holdout());
+                for (int i = 0; i < errors[0].length; i++) {
+                    actual.add(errors[0][i]);
+                    forecast.add(errors[1][i]);
+                }
+            }
+            return AccuracyMeasures.of(actual.stream().mapToDouble(Double::doubleValue).toArray(),
+                    forecast.stream().mapToDouble(Double::doubleValue).toArray(),
+                    AccuracyMeasures.seasonalNaiveScale(series.head(series.size() - spec.origins())));
+        }
+
+        private static double[] oneStepErrors(Observations series, Candidate candidate, ComparisonSpec spec) {
+            double[] errors = new double[spec.origins()];
+            for (int o = 0; o < spec.origins(); o++) {
+                double[][] e = errors(series, series.head(series.size() - spec.origins() + o), candidate, spec, 1);
+                errors[o] = e[0][0] - e[1][0];
+            }
+            return errors;
+        }
+
+        private static double[][] errors(Observations series, Observations training, Candidate candidate,
+                                         ComparisonSpec spec, int steps) {
+            int first = training.size();
+            int last = Math.min(series.size(), first + steps);
+            int horizon = series.timeAt(last - 1) - training.lastTime();
+            Forecast forecast = candidate.fit(training).forecast(horizon, spec.levels());
+            double[][] errors = new double[2][last - first];
+            for (int i = first; i < last; i++) {
+                errors[0][i - first] = series.valueAt(i);
+                errors[1][i - first] = forecast.points().get(series.timeAt(i) - training.lastTime() - 1).value();
+            }
+            return errors;
+        }
+    }
+}
