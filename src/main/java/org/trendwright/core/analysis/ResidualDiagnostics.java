@@ -31,9 +31,4 @@ public record ResidualDiagnostics(DurbinWatsonResult durbinWatson, BreuschGodfre
         tests.add(arch.test());
         return tests;
     }
-
-    /** The serial-correlation checks a model must pass to be trusted: Durbin-Watson, Breusch-Godfrey LM, Ljung-Box. */
-    public List<TestResult> serialCorrelationChecks() {
-        return List.of(durbinWatson.toTestResult(), breuschGodfrey.lagrangeMultiplier(), ljungBox.test());
-    }
 }

@@ -60,11 +60,19 @@ public final class TrendAnalyses {
      * or is too short for them.
      */
     public static List<TestResult> serialCorrelationChecks(TrendFit fit, double level) {
-        TrendAnalysisSpec spec = TrendAnalysisSpec.of(fit.spec());
-        TrendAnalysisSpec atLevel = new TrendAnalysisSpec(spec.trend(), spec.errors(), spec.hacLag(),
-                spec.serialCorrelationOrder(), spec.horizon(), spec.levels(), level);
-        return diagnose(fit, atLevel, new ArrayList<>()).map(ResidualDiagnostics::serialCorrelationChecks)
-                .orElse(List.of());
+        if (fit.series().hasGaps()) {
+            return List.of();
+        }
+        OlsFit ols = fit.ols();
+        try {
+            // Only the three checks a candidate must pass: model comparison calls this for every
+            // candidate of every series, so ARCH and the correlogram are not computed to be dropped.
+            return List.of(DurbinWatson.test(ols, level).toTestResult(),
+                    BreuschGodfrey.testAtSeasonalOrder(ols, fit.series().periodsPerYear(), level).lagrangeMultiplier(),
+                    LjungBox.testWithDefaultLags(ols.residuals(), fit.series().periodsPerYear(), 0, level).test());
+        } catch (ModelException e) {
+            return List.of();
+        }
     }
 
     /** The residual checks of a least-squares fit, or empty with a note saying why they were skipped. */
