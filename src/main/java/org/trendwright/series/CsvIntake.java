@@ -53,8 +53,9 @@ public final class CsvIntake {
     }
 
     /**
-     * The series in the file read from {@code body}, telling {@code rowsRead} the count of rows read
-     * every {@value #PROGRESS_EVERY} rows and at the end. Does not close the stream.
+     * The series in the file read from {@code body}, telling {@code rowsRead} the count of data rows
+     * read (the header left out) every {@value #PROGRESS_EVERY} records and at the end. Does not
+     * close the stream.
      */
     public static List<SeriesInput> read(InputStream body, IntakeOptions options, LongConsumer rowsRead) {
         Reader chars = new InputStreamReader(body, StandardCharsets.UTF_8.newDecoder()
@@ -140,16 +141,17 @@ public final class CsvIntake {
                 columns.add(first);
             }
             long count = 1;
+            long header = layout.hasHeader() ? 1 : 0;
             for (CsvRow row = second; row != null; row = checkedNext()) {
                 if (++count > cap) {
                     throw tooManyRows(row, cap, options.limits());
                 }
                 columns.add(row);
                 if (count % PROGRESS_EVERY == 0) {
-                    rowsRead.accept(count);
+                    rowsRead.accept(count - header);
                 }
             }
-            rowsRead.accept(count);
+            rowsRead.accept(count - header);
             List<SeriesInput> series = columns.finish();
             if (series.size() > options.limits().maxSeriesPerUpload()) {
                 throw tooManySeries(series.size(), options.limits());

@@ -10,6 +10,8 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.Statement;
 import java.time.Clock;
 import java.util.List;
 import java.util.Random;
@@ -128,6 +130,59 @@ class PageBrowserTest {
         visit("#/");
         browser.await(ExpectedConditions.visibilityOfElementLocated(By.cssSelector("#series-table a.series-link")));
         browser.screenshot("series-list-tablet");
+    }
+
+    /**
+     * The bar follows the server's own report of a multi-series upload. To see a phase for sure
+     * rather than by the luck of a poll's timing, the test holds the SQLite store's write lock (as
+     * another writer would) while the upload waits to store, releases it once the bar shows the
+     * storing phase, and then expects the bar to finish.
+     */
+    @Test
+    void the_upload_bar_shows_the_servers_phases_of_a_multi_series_upload() throws Exception {
+        browser.driver.manage().window().setSize(new Dimension(1280, 800));
+        visit("#/upload");
+        browser.find("#file-input").sendKeys(csvFile(wideSeries(300, 12)).toString());
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("preview-summary"), "quarterly"));
+        browser.js("window.barTexts = [];"
+                + "const text = document.getElementById('upload-progress-text');"
+                + "new MutationObserver(() => window.barTexts.push(text.textContent))"
+                + ".observe(text, {childList: true, characterData: true, subtree: true});");
+        try (Connection writer = server.database().dataSource().getConnection()) {
+            writer.setAutoCommit(false);
+            try (Statement s = writer.createStatement()) {
+                s.executeUpdate("DELETE FROM upload WHERE id < 0"); // takes the write lock, changes nothing
+            }
+            browser.find("#upload-save").click();
+            browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("upload-progress-text"),
+                    "Storing series 0 of 300"));
+            browser.screenshot("upload-progress-storing");
+            writer.rollback();
+        }
+        browser.await(ExpectedConditions.visibilityOfElementLocated(By.cssSelector("#series-table a.series-link")));
+        @SuppressWarnings("unchecked")
+        List<String> texts = (List<String>) browser.js("return window.barTexts;");
+        assertTrue(texts.contains("60% – Storing series 0 of 300"), texts.toString());
+        assertEquals("100% – 300 series saved", texts.get(texts.size() - 1), texts.toString());
+        List<Integer> percents = texts.stream().map(t -> Integer.parseInt(t.substring(0, t.indexOf('%')))).toList();
+        for (int i = 1; i < percents.size(); i++) {
+            assertTrue(percents.get(i) >= percents.get(i - 1), "the bar went back: " + texts);
+        }
+    }
+
+    /** A wide CSV of {@code count} quarterly series (invented values) of {@code length} quarters. */
+    private static String wideSeries(int count, int length) {
+        StringBuilder csv = new StringBuilder("period");
+        for (int s = 0; s < count; s++) {
+            csv.append(",series ").append(s);
+        }
+        for (int t = 0; t < length; t++) {
+            csv.append('\n').append(2016 + t / 4).append("-Q").append(t % 4 + 1);
+            for (int s = 0; s < count; s++) {
+                csv.append(',').append(100 + s + t);
+            }
+        }
+        return csv.append('\n').toString();
     }
 
     @Test
