@@ -7,14 +7,14 @@
 # upload on a new JVM, then a second once the JIT has compiled the intake code) and reports the wall
 # time of each upload, the server's CPU seconds for it, the peak heap in use before any collection
 # over the server's life (from the GC log) and the load average. Usage (after mvn -B -q package -DskipTests):
-#   src/test/bench/csv-intake.sh [port 7400] [series 1000] [periods 1000] [runs 3] [database-url]
+#   [TRENDWRIGHT_JAR=path] src/test/bench/csv-intake.sh [port 7400] [series 1000] [periods 1000] [runs 3] [database-url]
 set -euo pipefail
 port=${1:-7400}
 series=${2:-1000}
 periods=${3:-1000}
 runs=${4:-3}
 database_url=${5:-}
-jar=target/trendwright.jar
+jar=${TRENDWRIGHT_JAR:-target/trendwright.jar}
 work=$(mktemp -d)
 trap 'kill "$pid" 2>/dev/null || true; wait "$pid" 2>/dev/null || true; rm -rf "$work"' EXIT
 python3 - "$series" "$periods" > "$work/upload.csv" <<'PY'
@@ -38,8 +38,7 @@ start_server() {
   local data="$work/data-$1"
   local store=()
   if [ -n "$database_url" ]; then
-    store=(--database-url="$database_url" --database-schema="bench_$1_$$")
-    psql "${database_url#jdbc:}" -qc "CREATE SCHEMA bench_$1_$$" >/dev/null 2>&1 || true
+    store=(--database-url="$database_url" --database-schema="bench_$1_$$") # Flyway creates the schema
   fi
   TRENDWRIGHT_SETUP_CODE=bench-setup-code-$$ java -Xmx256m -Xlog:gc:file="$work/gc-$1.log" -jar "$jar" --port="$port" --data-dir="$data" \
     --demo-data=false --job-workers=0 --max-body-bytes=$((64 * 1024 * 1024)) "${store[@]}" > "$work/server-$1.log" 2>&1 &
@@ -67,8 +66,12 @@ stop_server() {
   wait "$pid" 2>/dev/null || true
 }
 peak_heap() {
-  # Largest heap in use before a collection, e.g. "Pause Young (Normal) (G1 Evacuation Pause) 120M->30M(256M)".
-  grep -o '[0-9]*M->[0-9]*M([0-9]*M)' "$1" | sed 's/M->.*//' | sort -n | tail -1
+  # Largest heap in use before a collection, and largest left after one (the live data plus what the
+  # collector chose not to free), from lines like "Pause Young (Normal) (G1 Evacuation Pause) 120M->30M(256M)".
+  local before after
+  before=$(grep -o '[0-9]*M->[0-9]*M([0-9]*M)' "$1" | sed 's/M->.*//' | sort -n | tail -1)
+  after=$(grep -o '[0-9]*M->[0-9]*M([0-9]*M)' "$1" | sed 's/.*->//; s/M(.*//' | sort -n | tail -1)
+  echo "${before}_before_gc,${after}_after_gc"
 }
 echo "rows=$((series * periods)) bytes=$bytes store=${database_url:-sqlite}"
 for run in $(seq 1 "$runs"); do
@@ -82,7 +85,7 @@ for run in $(seq 1 "$runs"); do
   done
   heap=$(jcmd "$pid" GC.heap_info 2>/dev/null | sed -n 2p | tr -s ' ' || true)
   stop_server
-  echo "$line peak_heap_before_gc_mb=$(peak_heap "$work/gc-$run.log") load=$(cut -d' ' -f1-3 /proc/loadavg)"
+  echo "$line peak_heap_mb=$(peak_heap "$work/gc-$run.log") load=$(cut -d' ' -f1-3 /proc/loadavg)"
   echo "  heap after (jcmd GC.heap_info):$heap"
 done
 head -c 200 "$work/answer.json"; echo
