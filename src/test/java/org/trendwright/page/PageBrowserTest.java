@@ -13,6 +13,7 @@ import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.Statement;
 import java.time.Clock;
+import java.time.Duration;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.AfterAll;
@@ -23,6 +24,7 @@ import org.openqa.selenium.Dimension;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
+import org.openqa.selenium.support.ui.WebDriverWait;
 import org.trendwright.app.TrendwrightApp;
 import org.trendwright.store.Database;
 import org.trendwright.testing.FreshStore;
@@ -135,8 +137,8 @@ class PageBrowserTest {
     /**
      * The bar follows the server's own report of a multi-series upload. To see a phase for sure
      * rather than by the luck of a poll's timing, the test holds the SQLite store's write lock (as
-     * another writer would) while the upload waits to store, releases it once the bar shows the
-     * storing phase, and then expects the bar to finish.
+     * another writer would) while the upload waits to store, and releases it once the bar shows the
+     * storing phase, or after 4 s at most: the store waits 5 s for a lock before it gives up.
      */
     @Test
     void the_upload_bar_shows_the_servers_phases_of_a_multi_series_upload() throws Exception {
@@ -154,10 +156,13 @@ class PageBrowserTest {
                 s.executeUpdate("DELETE FROM upload WHERE id < 0"); // takes the write lock, changes nothing
             }
             browser.find("#upload-save").click();
-            browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("upload-progress-text"),
-                    "Storing series 0 of 300"));
+            try {
+                new WebDriverWait(browser.driver, Duration.ofSeconds(4), Duration.ofMillis(50)).until(ExpectedConditions
+                        .textToBePresentInElementLocated(By.id("upload-progress-text"), "Storing series 0 of 300"));
+            } finally {
+                writer.rollback();
+            }
             browser.screenshot("upload-progress-storing");
-            writer.rollback();
         }
         browser.await(ExpectedConditions.visibilityOfElementLocated(By.cssSelector("#series-table a.series-link")));
         @SuppressWarnings("unchecked")
