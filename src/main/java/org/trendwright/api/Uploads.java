@@ -78,10 +78,32 @@ final class Uploads {
 
     private List<SeriesInput> readCsv(InputStream body, LongConsumer bytesRead, LongConsumer rowsRead,
                                       IntakeOptions options) {
-        try (InputStream limited = new LimitedBody(body, maxBodyBytes, bytesRead)) {
+        LimitedBody limited = new LimitedBody(body, maxBodyBytes, bytesRead);
+        try {
             return CsvIntake.read(limited, options, rowsRead);
-        } catch (IOException e) {
-            throw new BadRequestException(null, "The request body could not be read: " + e.getMessage());
+        } catch (RuntimeException e) {
+            drain(body, 2 * maxBodyBytes - limited.count);
+            throw e;
+        }
+    }
+
+    /**
+     * Reads and drops up to {@code budget} more bytes of a refused body, so that a client still
+     * sending it gets the answer instead of a broken connection; Jetty closes the connection on
+     * whatever is left beyond that.
+     */
+    private static void drain(InputStream body, long budget) {
+        byte[] buffer = new byte[8192];
+        try {
+            for (long left = budget; left > 0; ) {
+                int n = body.read(buffer, 0, (int) Math.min(buffer.length, left));
+                if (n < 0) {
+                    return;
+                }
+                left -= n;
+            }
+        } catch (IOException | RuntimeException e) {
+            // The client went away or the stream is closed: nothing left to be polite to.
         }
     }
 
@@ -93,6 +115,7 @@ final class Uploads {
     private InputStream body(Context ctx) {
         long length = ctx.req().getContentLengthLong();
         if (length > maxBodyBytes) {
+            drain(ctx.bodyInputStream(), 2 * maxBodyBytes);
             throw tooLarge();
         }
         return ctx.bodyInputStream();

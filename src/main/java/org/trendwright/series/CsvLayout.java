@@ -50,7 +50,7 @@ record CsvLayout(boolean longFormat, boolean hasHeader) {
         if (count > options.limits().maxSeriesPerUpload()) {
             throw CsvIntake.tooManySeries(count, options.limits());
         }
-        return new WideColumns(first, wideNames(first, options));
+        return new WideColumns(first, options);
     }
 
     /** The data rows of one upload, kept per series in primitive arrays. */
@@ -116,17 +116,20 @@ record CsvLayout(boolean longFormat, boolean hasHeader) {
         }
     }
 
-    /** One period column shared by every series column. */
+    /**
+     * One period column shared by every series column. The names are checked once the rows are
+     * read, so that a bad period is reported before a bad name, as in a file read whole.
+     */
     private final class WideColumns implements Columns {
         private final CsvRow header;
-        private final List<String> names;
+        private final IntakeOptions options;
         private final Column periods = new Column(new PeriodColumn.Reader(new HashMap<>()), false);
         private double[][] values;
 
-        WideColumns(CsvRow header, List<String> names) {
+        WideColumns(CsvRow header, IntakeOptions options) {
             this.header = header;
-            this.names = names;
-            this.values = new double[names.size()][4];
+            this.options = options;
+            this.values = new double[header.width() - 1][4];
         }
 
         @Override
@@ -143,6 +146,7 @@ record CsvLayout(boolean longFormat, boolean hasHeader) {
         @Override
         public List<SeriesInput> finish() {
             Frequency frequency = periods.finish();
+            List<String> names = wideNames(header, options);
             int[] lines = periods.lines;
             List<SeriesInput> series = new ArrayList<>(names.size());
             for (int c = 0; c < names.size(); c++) {
