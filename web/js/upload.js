@@ -1,7 +1,8 @@
 // Upload: a CSV file (drop or chooser) or cells pasted from a spreadsheet. The server's dry run
 // (POST /api/series/preview) reads it first; the preview shows every line with its problems,
-// and Save sends the same text to POST /api/series with a progress bar.
-import { post, postWithProgress } from './api.js';
+// and Save sends the same text to POST /api/series. Its progress bar follows the bytes sent and then
+// the server's own report (GET /api/upload-progress/{key}): rows read, series checked, series stored.
+import { get, post, postWithProgress } from './api.js';
 import { byId, el, fill, say } from './dom.js';
 
 let pending = null; // { text, contentType, delimiter }
@@ -87,22 +88,72 @@ function problemText(p) {
     `Problem${p.column ? ` in column ${p.column}` : ''}: ${p.detail}`);
 }
 
+/** A random key naming this upload's progress on the server (32 hex digits). */
+function progressKey() {
+  const bytes = new Uint8Array(16);
+  crypto.getRandomValues(bytes);
+  return Array.from(bytes, (b) => b.toString(16).padStart(2, '0')).join('');
+}
+
+/** What the server says it is doing, in words. */
+function describe(state) {
+  switch (state.phase) {
+    case 'receiving': return `Reading rows: ${state.rowsRead.toLocaleString('en')} read`;
+    case 'checking': return `Checking series ${state.seriesChecked} of ${state.seriesTotal}`;
+    case 'storing': return `Storing series ${state.seriesStored} of ${state.seriesTotal}`;
+    case 'done': return `Stored ${state.seriesTotal} series`;
+    default: return 'The server refused the upload';
+  }
+}
+
+const pause = (ms) => new Promise((resolve) => { setTimeout(resolve, ms); });
+
+/**
+ * Polls the server's progress of the upload until stop() is called. A 404 means the server has not
+ * started on it yet (or, behind several instances, another instance handles it): the bar then keeps
+ * showing the bytes sent.
+ */
+function followServer(key, show) {
+  let running = true;
+  (async () => {
+    while (running) {
+      try {
+        const state = await get(`/api/upload-progress/${encodeURIComponent(key)}`);
+        if (running && state.phase !== 'failed') show(state.percent, describe(state));
+      } catch {
+        // Not known (yet) on this instance: the bytes sent still move the bar.
+      }
+      await pause(200);
+    }
+  })();
+  return () => { running = false; };
+}
+
 async function save() {
   if (!pending) return;
   byId('upload-save').disabled = true;
   byId('upload-progress-row').hidden = false;
   const bar = byId('upload-progress');
-  const progress = (fraction) => {
-    bar.value = Math.round(fraction * 90);
-    byId('upload-progress-text').textContent = `${bar.value}%`;
+  let shown = 0;
+  const show = (percent, text) => {
+    if (percent < shown) return; // the byte count and the server's report may arrive out of order
+    shown = percent;
+    bar.value = Math.round(percent);
+    byId('upload-progress-text').textContent = `${bar.value}% – ${text}`;
   };
+  show(0, 'Sending the file');
+  const key = progressKey();
+  const stop = followServer(key, show);
   try {
-    const answer = await postWithProgress(`/api/series?${query(pending.delimiter)}`, pending.text, pending.contentType, progress);
-    bar.value = 100;
-    byId('upload-progress-text').textContent = `100% – ${answer.series.length} series saved`;
+    const answer = await postWithProgress(`/api/series?${query(pending.delimiter)}&progress=${key}`, pending.text,
+      pending.contentType, (fraction) => show(fraction * 40, 'Sending the file'));
+    stop();
+    shown = 0;
+    show(100, `${answer.series.length} series saved`);
     const created = answer.series;
     location.hash = created.length === 1 ? `#/series/${created[0].id}` : '#/';
   } catch (error) {
+    stop();
     byId('upload-save').disabled = false;
     say(byId('upload-message'), error.message, 'error');
   }

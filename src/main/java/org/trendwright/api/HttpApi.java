@@ -71,7 +71,7 @@ public final class HttpApi {
 
     public static Built create(Services services, Team team) {
         List<String> routes = new CopyOnWriteArrayList<>();
-        Uploads uploads = new Uploads(services.mapper(), services.limits());
+        Uploads uploads = new Uploads(services.mapper(), services.limits(), services.maxBodyBytes());
         FitService fitService = new FitService(services.fits(), services.mapper(), services.registry());
         RequestObserver observer = new RequestObserver(services.registry());
         Javalin app = Javalin.create(config -> {
@@ -96,10 +96,10 @@ public final class HttpApi {
             ProblemMapper.register(config.routes);
             config.routes.before(ctx -> services.storeReady().join());
             new AuthGate(team.members(), team.tokens(), team.audit(), team.settings()).register(config.routes);
-            new SeriesRoutes(services.series(), uploads).register(config.routes);
+            new SeriesRoutes(services.series(), uploads, new UploadProgress(team.clock())).register(config.routes);
             new FitRoutes(services.series(), fitService, uploads,
                     new FitGate(services.maxConcurrentFits(), services.maxQueuedFits())).register(config.routes);
-            new JobRoutes(services.jobs(), uploads).register(config.routes);
+            new JobRoutes(services.jobs(), services.series(), uploads).register(config.routes);
             new TeamRoutes(team, uploads).register(config.routes);
             new BriefRoutes(services.series(), team.briefs(), fitService, uploads, services.mapper(), team.clock())
                     .register(config.routes);

@@ -7,9 +7,11 @@ import java.util.Locale;
 import org.trendwright.jobs.JobProgress;
 import org.trendwright.jobs.SeriesVerdict;
 import org.trendwright.store.JobRepository;
+import org.trendwright.store.SeriesRepository;
 
 /**
- * The batch fitting routes: create a job over stored series (its items are judged in the
+ * The batch fitting routes: create a job over stored series, named by id or by the upload that
+ * created them (its items are judged in the
  * background by every instance's workers), read its progress, read its results as JSON or CSV.
  * Thread-safe.
  */
@@ -18,8 +20,8 @@ final class JobRoutes {
     /** Most series one job may name. */
     static final int MAX_SERIES_PER_JOB = 100_000;
 
-    /** The body of POST /api/jobs. */
-    record JobRequest(List<Long> seriesIds) {
+    /** The body of POST /api/jobs: the series ids, or the id of the upload whose series to judge. */
+    record JobRequest(List<Long> seriesIds, Long uploadId) {
     }
 
     /** A job's progress as JSON. */
@@ -36,10 +38,12 @@ final class JobRoutes {
     }
 
     private final JobRepository jobs;
+    private final SeriesRepository series;
     private final Uploads uploads;
 
-    JobRoutes(JobRepository jobs, Uploads uploads) {
+    JobRoutes(JobRepository jobs, SeriesRepository series, Uploads uploads) {
         this.jobs = jobs;
+        this.series = series;
         this.uploads = uploads;
     }
 
@@ -51,7 +55,7 @@ final class JobRoutes {
 
     private void create(Context ctx) {
         JobRequest request = uploads.body(ctx, JobRequest.class);
-        List<Long> ids = request.seriesIds();
+        List<Long> ids = request.uploadId() == null ? request.seriesIds() : uploadSeries(request);
         if (ids == null || ids.isEmpty() || ids.size() > MAX_SERIES_PER_JOB || ids.contains(null)) {
             throw new BadRequestException("seriesIds", "seriesIds must list 1.." + MAX_SERIES_PER_JOB
                     + " series ids, e.g. {\"seriesIds\": [1, 2, 3]}.");
@@ -62,6 +66,21 @@ final class JobRoutes {
         long id = jobs.create(ids);
         ctx.header("Location", "/api/jobs/" + id);
         ctx.status(202).json(Progress.of(found(id)));
+    }
+
+    /** The series an upload created that still exist; the request names the upload or the series, not both. */
+    private List<Long> uploadSeries(JobRequest request) {
+        if (request.seriesIds() != null) {
+            throw new BadRequestException("uploadId", "Name either seriesIds or uploadId, not both.");
+        }
+        long uploadId = request.uploadId();
+        List<Long> ids = series.uploadSeries(uploadId).orElseThrow(() -> new BadRequestException(404, "not-found",
+                "uploadId", "There is no upload " + uploadId + "; POST /api/series answers with the uploadId."));
+        if (ids.isEmpty()) {
+            throw new BadRequestException(409, "conflict", "uploadId", "Every series of upload " + uploadId
+                    + " has been deleted; upload them again or name other seriesIds.");
+        }
+        return ids;
     }
 
     private void progress(Context ctx) {

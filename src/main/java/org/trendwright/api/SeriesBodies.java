@@ -29,8 +29,8 @@ public final class SeriesBodies {
         }
     }
 
-    /** The answer to an upload: every series it created. */
-    public record Created(List<Summary> series) {
+    /** The answer to an upload: its id (POST /api/jobs takes it) and every series it created. */
+    public record Created(long uploadId, List<Summary> series) {
     }
 
     /** The list of series. */

@@ -2,6 +2,7 @@ package org.trendwright.api;
 
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
+import java.util.ArrayList;
 import java.util.List;
 import org.trendwright.series.IntakeOptions;
 import org.trendwright.series.SeriesAssembly;
@@ -9,21 +10,26 @@ import org.trendwright.series.SeriesDraft;
 import org.trendwright.series.SeriesInput;
 import org.trendwright.series.SeriesSummary;
 import org.trendwright.series.SeriesVersion;
+import org.trendwright.series.StoredUpload;
+import org.trendwright.team.Principal;
 import org.trendwright.store.SeriesRepository;
 
 /**
  * The series routes: upload, list, read (current or any version), new versions under If-Match,
- * delete under If-Match. Every upload is one transaction: a refused upload stores nothing.
+ * delete under If-Match, and the progress of an upload in flight (see {@link UploadProgress}).
+ * Every upload is one transaction: a refused upload stores nothing.
  * Thread-safe.
  */
 final class SeriesRoutes {
 
     private final SeriesRepository repository;
     private final Uploads uploads;
+    private final UploadProgress progress;
 
-    SeriesRoutes(SeriesRepository repository, Uploads uploads) {
+    SeriesRoutes(SeriesRepository repository, Uploads uploads, UploadProgress progress) {
         this.repository = repository;
         this.uploads = uploads;
+        this.progress = progress;
     }
 
     void register(RoutesConfig routes) {
@@ -34,18 +40,57 @@ final class SeriesRoutes {
         routes.get("/api/series/{id}/versions", this::versions);
         routes.post("/api/series/{id}/versions", this::revise);
         routes.get("/api/series/{id}/versions/{version}", this::version);
+        routes.get("/api/upload-progress/{key}", this::progress);
     }
 
+    /**
+     * Reads, checks and stores an upload, reporting each phase to the progress key the request
+     * names (query parameter {@code progress}), if any.
+     */
     private void create(Context ctx) {
         IntakeOptions options = uploads.options(ctx);
-        List<SeriesDraft> drafts = uploads.readMany(ctx).stream().map(in -> SeriesAssembly.create(in, options))
-                .toList();
-        List<SeriesVersion> created = repository.createAll(drafts);
-        if (created.size() == 1) {
-            ctx.header("Location", "/api/series/" + created.get(0).seriesId());
-            ctx.header("ETag", ETags.of(created.get(0).seriesId(), 1));
+        UploadProgress.Tracker tracker = progress.start(ctx.queryParam("progress"), memberId(ctx),
+                ctx.req().getContentLengthLong() < 0 ? null : ctx.req().getContentLengthLong());
+        try {
+            StoredUpload stored = store(ctx, options, tracker);
+            tracker.done();
+            List<SeriesSummary> created = stored.series();
+            if (created.size() == 1) {
+                ctx.header("Location", "/api/series/" + created.get(0).id());
+                ctx.header("ETag", ETags.of(created.get(0).id(), 1));
+            }
+            ctx.status(201).json(new SeriesBodies.Created(stored.uploadId(),
+                    created.stream().map(SeriesBodies.Summary::of).toList()));
+        } catch (RuntimeException e) {
+            tracker.failed();
+            throw e;
         }
-        ctx.status(201).json(new SeriesBodies.Created(created.stream().map(SeriesBodies.Summary::of).toList()));
+    }
+
+    private StoredUpload store(Context ctx, IntakeOptions options, UploadProgress.Tracker tracker) {
+        List<SeriesInput> inputs = new ArrayList<>(uploads.readMany(ctx, tracker::bytesRead, tracker::rowsRead));
+        List<SeriesDraft> drafts = new ArrayList<>(inputs.size());
+        tracker.checked(0, inputs.size());
+        for (int i = 0; i < inputs.size(); i++) {
+            drafts.add(SeriesAssembly.create(inputs.get(i), options));
+            inputs.set(i, null); // the checked draft replaces the rows as read
+            tracker.checked(i + 1, inputs.size());
+        }
+        tracker.stored(0);
+        return repository.createAll(drafts, tracker::stored);
+    }
+
+    private void progress(Context ctx) {
+        String key = ctx.pathParam("key");
+        ctx.json(progress.find(key, memberId(ctx)).orElseThrow(() -> new BadRequestException(404, "not-found", null,
+                "This instance tracks no upload of yours with progress key " + key + "; it may not have started"
+                        + " yet, may have finished over " + UploadProgress.KEEP.toMinutes() + " minutes ago, or may"
+                        + " run on another instance.")));
+    }
+
+    private static Long memberId(Context ctx) {
+        Principal principal = AuthGate.principal(ctx);
+        return principal == null ? null : principal.member().id();
     }
 
     private void list(Context ctx) {

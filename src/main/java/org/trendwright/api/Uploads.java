@@ -8,10 +8,13 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import io.javalin.http.Context;
 import io.javalin.http.UploadedFile;
 import org.eclipse.jetty.http.BadMessageException;
+import io.javalin.http.ContentTooLargeResponse;
+import java.io.FilterInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.LongConsumer;
 import java.util.stream.Collectors;
 import org.trendwright.series.CsvIntake;
 import org.trendwright.series.Delimiters;
@@ -25,16 +28,20 @@ import org.trendwright.series.SeriesInput;
  * Reads the series of an upload by its content type: application/json, text/csv (also
  * text/plain, text/tab-separated-values, application/csv) as the raw body, or multipart/form-data
  * with the CSV file in the part named {@code file}. Query parameters: {@code missing=refuse|gap},
- * {@code delimiter=comma|semicolon|tab}, {@code name} (for a CSV without header, or one with a single series column). Thread-safe.
+ * {@code delimiter=comma|semicolon|tab}, {@code name} (for a CSV without header, or one with a single series column).
+ * A CSV body is parsed as it streams in (see {@link CsvIntake}); the body limit is enforced while
+ * reading. Thread-safe.
  */
 final class Uploads {
 
     private final ObjectMapper mapper;
     private final IntakeLimits limits;
+    private final long maxBodyBytes;
 
-    Uploads(ObjectMapper mapper, IntakeLimits limits) {
+    Uploads(ObjectMapper mapper, IntakeLimits limits, long maxBodyBytes) {
         this.mapper = mapper;
         this.limits = limits;
+        this.maxBodyBytes = maxBodyBytes;
     }
 
     IntakeOptions options(Context ctx) {
@@ -53,12 +60,107 @@ final class Uploads {
 
     /** Every series of a create request. */
     List<SeriesInput> readMany(Context ctx) {
+        return readMany(ctx, bytes -> { }, rows -> { });
+    }
+
+    /**
+     * Every series of a create request; a CSV body (raw or the multipart file) is read as a stream,
+     * telling {@code bytesRead} and {@code rowsRead} how far it got.
+     */
+    List<SeriesInput> readMany(Context ctx, LongConsumer bytesRead, LongConsumer rowsRead) {
         IntakeOptions options = options(ctx);
         return switch (kind(ctx)) {
             case JSON -> JsonIntake.readMany(json(ctx), options);
-            case CSV -> CsvIntake.read(ctx.bodyAsBytes(), options);
-            case MULTIPART -> CsvIntake.read(filePart(ctx), options);
+            case CSV -> readCsv(body(ctx), bytesRead, rowsRead, options);
+            case MULTIPART -> readCsv(filePart(ctx), bytesRead, rowsRead, options);
         };
+    }
+
+    private List<SeriesInput> readCsv(InputStream body, LongConsumer bytesRead, LongConsumer rowsRead,
+                                      IntakeOptions options) {
+        LimitedBody limited = new LimitedBody(body, maxBodyBytes, bytesRead);
+        try {
+            return CsvIntake.read(limited, options, rowsRead);
+        } catch (RuntimeException e) {
+            drain(body, 2 * maxBodyBytes - limited.count);
+            throw e;
+        }
+    }
+
+    /**
+     * Reads and drops up to {@code budget} more bytes of a refused body, so that a client still
+     * sending it gets the answer instead of a broken connection; Jetty closes the connection on
+     * whatever is left beyond that.
+     */
+    private static void drain(InputStream body, long budget) {
+        byte[] buffer = new byte[8192];
+        try {
+            for (long left = budget; left > 0; ) {
+                int n = body.read(buffer, 0, (int) Math.min(buffer.length, left));
+                if (n < 0) {
+                    return;
+                }
+                left -= n;
+            }
+        } catch (IOException | RuntimeException e) {
+            // The client went away or the stream is closed: nothing left to be polite to.
+        }
+    }
+
+    /**
+     * The raw body as a stream. Javalin checks its body limit only when it reads the whole body,
+     * so the limit is checked here: at once against Content-Length, and while reading by
+     * {@link LimitedBody} (a chunked body has no length).
+     */
+    private InputStream body(Context ctx) {
+        long length = ctx.req().getContentLengthLong();
+        if (length > maxBodyBytes) {
+            drain(ctx.bodyInputStream(), 2 * maxBodyBytes);
+            throw tooLarge();
+        }
+        return ctx.bodyInputStream();
+    }
+
+    private ContentTooLargeResponse tooLarge() {
+        return new ContentTooLargeResponse("The request body is larger than the configured limit of " + maxBodyBytes
+                + " bytes (setting max-body-bytes); split the upload.");
+    }
+
+    /** Counts the bytes read, refuses to read past the limit, and reports read failures as the client's. */
+    private final class LimitedBody extends FilterInputStream {
+        private final long limit;
+        private final LongConsumer bytesRead;
+        private long count;
+
+        LimitedBody(InputStream in, long limit, LongConsumer bytesRead) {
+            super(in);
+            this.limit = limit;
+            this.bytesRead = bytesRead;
+        }
+
+        @Override
+        public int read() throws IOException {
+            byte[] one = new byte[1];
+            return read(one, 0, 1) < 0 ? -1 : one[0] & 0xff;
+        }
+
+        @Override
+        public int read(byte[] buffer, int from, int length) {
+            int n;
+            try {
+                n = in.read(buffer, from, length);
+            } catch (IOException e) {
+                throw new BadRequestException(null, "The request body could not be read: " + e.getMessage());
+            }
+            if (n > 0) {
+                count += n;
+                if (count > limit) {
+                    throw tooLarge();
+                }
+                bytesRead.accept(count);
+            }
+            return n;
+        }
     }
 
     /** Every series of a CSV body (the preview reads a body it has edited). */
@@ -71,8 +173,8 @@ final class Uploads {
         IntakeOptions options = options(ctx);
         List<SeriesInput> inputs = switch (kind(ctx)) {
             case JSON -> List.of(JsonIntake.readOne(json(ctx), "", false));
-            case CSV -> CsvIntake.read(ctx.bodyAsBytes(), options);
-            case MULTIPART -> CsvIntake.read(filePart(ctx), options);
+            case CSV -> readCsv(body(ctx), bytes -> { }, rows -> { }, options);
+            case MULTIPART -> readCsv(filePart(ctx), bytes -> { }, rows -> { }, options);
         };
         if (inputs.size() != 1) {
             throw new BadRequestException(422, "invalid-upload", null, "A new version takes one series, but the"
@@ -157,16 +259,13 @@ final class Uploads {
                 + " in /api/openapi.json.");
     }
 
-    private static byte[] filePart(Context ctx) {
+    /** The part named file as a stream (Jetty holds the parts, within the multipart size limits). */
+    private static InputStream filePart(Context ctx) {
         UploadedFile file = uploadedFile(ctx);
         if (file == null) {
             throw new BadRequestException("file", "A multipart upload needs the CSV file in a part named 'file'.");
         }
-        try (InputStream in = file.content()) {
-            return in.readAllBytes();
-        } catch (IOException e) {
-            throw new BadRequestException("file", "The uploaded file could not be read: " + e.getMessage());
-        }
+        return file.content();
     }
 
     /** The part named file; a body Jetty cannot split into parts is the client's error, not the server's. */

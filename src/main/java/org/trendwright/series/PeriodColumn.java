@@ -4,6 +4,7 @@ import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.TreeSet;
 import org.trendwright.series.IntakeException.Reason;
 
@@ -48,6 +49,67 @@ public final class PeriodColumn {
         return dates.stream().map(d -> periodOf(d, frequency)).toList();
     }
 
+    /**
+     * Reads a period column one cell at a time, for uploads too large to hold as cells: each cell
+     * becomes a number (the period's running index, or the epoch day of a calendar date whose
+     * frequency is decided by {@link #finish}), checked against the first cell's form as it
+     * arrives. Parsed texts are remembered in a cache shared by the columns of one upload, since a
+     * large upload repeats a few period texts many times. Not thread-safe: one upload's reader.
+     */
+    static final class Reader {
+
+        /** Most distinct period texts remembered per upload. */
+        private static final int CACHE_LIMIT = 4096;
+
+        private final Map<String, PeriodParser.Parsed> cache;
+        private String firstText;
+        private String firstKind;
+        private Where firstWhere;
+
+        /** @param cache the upload's cache of parsed period texts */
+        Reader(Map<String, PeriodParser.Parsed> cache) {
+            this.cache = cache;
+        }
+
+        /** The number standing for the period in {@code text} at a CSV line and column (1-based). */
+        long read(String text, int line, int column) {
+            PeriodParser.Parsed parsed = cache.get(text);
+            if (parsed == null) {
+                parsed = parseCell(new Cell(text, Where.cell(line, column)));
+                if (cache.size() < CACHE_LIMIT) {
+                    cache.put(text, parsed);
+                }
+            }
+            if (firstKind == null) {
+                firstText = text;
+                firstKind = parsed.kind();
+                firstWhere = Where.cell(line, column);
+            } else if (!parsed.kind().equals(firstKind)) {
+                throw mixed(text, parsed.kind(), firstText, firstKind, Where.cell(line, column));
+            }
+            return parsed.period() != null ? parsed.period().index() : parsed.date().toEpochDay();
+        }
+
+        /**
+         * The column's frequency, after turning the epoch days of a date column into period
+         * indexes in place ({@code keys[0..count)} are the numbers {@link #read} returned).
+         */
+        Frequency finish(long[] keys, int count) {
+            if (firstKind == null || !firstKind.equals("date")) {
+                return firstKind == null ? null : Frequency.fromJsonName(firstKind).orElseThrow();
+            }
+            List<LocalDate> dates = new ArrayList<>(count);
+            for (int i = 0; i < count; i++) {
+                dates.add(LocalDate.ofEpochDay(keys[i]));
+            }
+            Frequency frequency = dateFrequency(dates, firstWhere);
+            for (int i = 0; i < count; i++) {
+                keys[i] = periodOf(dates.get(i), frequency).index();
+            }
+            return frequency;
+        }
+    }
+
     private static PeriodParser.Parsed parseCell(Cell cell) {
         if (cell.text() == null || cell.text().isBlank()) {
             throw new IntakeException(Reason.INVALID_VALUE, cell.where(), "the period is empty; every row needs one.");
@@ -59,12 +121,16 @@ public final class PeriodColumn {
     private static void checkOneKind(List<Cell> cells, List<PeriodParser.Parsed> parsed) {
         for (int i = 1; i < parsed.size(); i++) {
             if (!parsed.get(i).kind().equals(parsed.get(0).kind())) {
-                throw new IntakeException(Reason.INCONSISTENT, cells.get(i).where(), "'" + cells.get(i).text().trim()
-                        + "' is " + article(parsed.get(i).kind()) + " period but the first period '"
-                        + cells.get(0).text().trim() + "' is " + article(parsed.get(0).kind())
-                        + "; a series has one frequency, so write every period in the same form.");
+                throw mixed(cells.get(i).text(), parsed.get(i).kind(), cells.get(0).text(), parsed.get(0).kind(),
+                        cells.get(i).where());
             }
         }
+    }
+
+    private static IntakeException mixed(String text, String kind, String firstText, String firstKind, Where where) {
+        return new IntakeException(Reason.INCONSISTENT, where, "'" + text.trim() + "' is " + article(kind)
+                + " period but the first period '" + firstText.trim() + "' is " + article(firstKind)
+                + "; a series has one frequency, so write every period in the same form.");
     }
 
     private static String article(String kind) {

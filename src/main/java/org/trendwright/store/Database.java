@@ -73,8 +73,19 @@ public final class Database implements AutoCloseable {
 
     /** Brings the schema up to date with this dialect's Flyway migrations. */
     public void migrate() {
+        migrate(null);
+    }
+
+    /** Migrates up to version {@code target} (null: the latest); tests of a migration start below it. */
+    void migrate(String target) {
         var flyway = Flyway.configure().dataSource(dataSource).locations(dialect.migrations())
                 .loggers("slf4j");
+        if (dialect == Dialect.SQLITE) {
+            flyway.javaMigrations(new PackObservationsMigration());
+        }
+        if (target != null) {
+            flyway.target(target);
+        }
         if (schema != null) {
             flyway.schemas(schema).defaultSchema(schema);
         }

@@ -8,12 +8,16 @@ import java.sql.Statement;
 import java.time.Clock;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.Function;
+import java.util.function.IntConsumer;
+import org.trendwright.series.Period;
 import org.trendwright.series.Point;
 import org.trendwright.series.SeriesDraft;
 import org.trendwright.series.SeriesNotFoundException;
 import org.trendwright.series.SeriesSummary;
 import org.trendwright.series.SeriesVersion;
+import org.trendwright.series.StoredUpload;
 import org.trendwright.series.VersionConflictException;
 import org.trendwright.series.VersionInfo;
 
@@ -33,18 +37,68 @@ public final class SeriesRepository {
         this.clock = clock;
     }
 
-    /** Stores every draft as version 1 of a new series, all in one transaction. */
-    public List<SeriesVersion> createAll(List<SeriesDraft> drafts) {
+    /** Rows of series_version sent to the database at once. */
+    static final int BATCH_SIZE = 100;
+
+    /** Stores every draft as version 1 of a new series under a new upload id, all in one transaction. */
+    public StoredUpload createAll(List<SeriesDraft> drafts) {
+        return createAll(drafts, stored -> { });
+    }
+
+    /**
+     * Stores every draft as version 1 of a new series under a new upload id, all in one
+     * transaction (a failure stores nothing), writing the versions in batches of
+     * {@value #BATCH_SIZE} and telling {@code stored} how many series are written after each batch.
+     */
+    public StoredUpload createAll(List<SeriesDraft> drafts, IntConsumer stored) {
         return jdbc.transaction("store the uploaded series", c -> {
             long now = clock.millis();
-            List<SeriesVersion> created = new ArrayList<>(drafts.size());
-            for (SeriesDraft draft : drafts) {
-                long id = insertSeries(c, draft, now);
-                insertVersion(c, id, 1, draft.points(), now);
-                created.add(new SeriesVersion(id, draft.name(), 1, draft.frequency(), SeriesRows.instant(now),
-                        draft.points()));
+            long uploadId = insertUpload(c, drafts.size(), now);
+            List<SeriesSummary> created = new ArrayList<>(drafts.size());
+            try (PreparedStatement versions = c.prepareStatement(INSERT_VERSION)) {
+                for (SeriesDraft draft : drafts) {
+                    long id = insertSeries(c, draft, uploadId, now);
+                    addVersion(versions, id, 1, now, draft.size(), draft.periodIndex(0),
+                            draft.periodIndex(draft.size() - 1), PackedPoints.pack(draft));
+                    created.add(new SeriesSummary(id, draft.name(), draft.frequency(), 1, SeriesRows.instant(now),
+                            SeriesRows.instant(now), draft.size(), new Period(draft.frequency(), draft.periodIndex(0)),
+                            new Period(draft.frequency(), draft.periodIndex(draft.size() - 1))));
+                    if (created.size() % BATCH_SIZE == 0) {
+                        versions.executeBatch();
+                        stored.accept(created.size());
+                    }
+                }
+                versions.executeBatch();
             }
-            return created;
+            stored.accept(created.size());
+            return new StoredUpload(uploadId, created);
+        });
+    }
+
+    /**
+     * The ids of the series an upload created that still exist, in creation order; empty when
+     * there is no such upload.
+     */
+    public Optional<List<Long>> uploadSeries(long uploadId) {
+        return jdbc.read("read upload " + uploadId, c -> {
+            try (PreparedStatement s = c.prepareStatement("SELECT id FROM upload WHERE id = ?")) {
+                s.setLong(1, uploadId);
+                try (ResultSet rs = s.executeQuery()) {
+                    if (!rs.next()) {
+                        return Optional.empty();
+                    }
+                }
+            }
+            try (PreparedStatement s = c.prepareStatement("SELECT id FROM series WHERE upload_id = ? ORDER BY id")) {
+                s.setLong(1, uploadId);
+                List<Long> ids = new ArrayList<>();
+                try (ResultSet rs = s.executeQuery()) {
+                    while (rs.next()) {
+                        ids.add(rs.getLong(1));
+                    }
+                }
+                return Optional.of(ids);
+            }
         });
     }
 
@@ -152,13 +206,27 @@ public final class SeriesRepository {
         }
     }
 
-    private static long insertSeries(Connection c, SeriesDraft draft, long now) throws SQLException {
+    private static long insertUpload(Connection c, int seriesCount, long now) throws SQLException {
+        try (PreparedStatement s = c.prepareStatement("INSERT INTO upload (created_at, series_count) VALUES (?, ?)",
+                new String[] {"id"})) {
+            s.setLong(1, now);
+            s.setInt(2, seriesCount);
+            s.executeUpdate();
+            try (ResultSet keys = s.getGeneratedKeys()) {
+                keys.next();
+                return keys.getLong(1);
+            }
+        }
+    }
+
+    private static long insertSeries(Connection c, SeriesDraft draft, long uploadId, long now) throws SQLException {
         try (PreparedStatement s = c.prepareStatement("INSERT INTO series (name, frequency, current_version,"
-                + " created_at, updated_at) VALUES (?, ?, 1, ?, ?)", new String[] {"id"})) {
+                + " created_at, updated_at, upload_id) VALUES (?, ?, 1, ?, ?, ?)", new String[] {"id"})) {
             s.setString(1, draft.name());
             s.setString(2, draft.frequency().jsonName());
             s.setLong(3, now);
             s.setLong(4, now);
+            s.setLong(5, uploadId);
             s.executeUpdate();
             try (ResultSet keys = s.getGeneratedKeys()) {
                 keys.next();
@@ -180,28 +248,27 @@ public final class SeriesRepository {
         }
     }
 
+    private static final String INSERT_VERSION = "INSERT INTO series_version (series_id, version, created_at,"
+            + " observation_count, first_period, last_period, points) VALUES (?, ?, ?, ?, ?, ?, ?)";
+
     private static void insertVersion(Connection c, long id, int version, List<Point> points, long now)
             throws SQLException {
-        try (PreparedStatement s = c.prepareStatement("INSERT INTO series_version (series_id, version, created_at,"
-                + " observation_count, first_period, last_period) VALUES (?, ?, ?, ?, ?, ?)")) {
-            s.setLong(1, id);
-            s.setInt(2, version);
-            s.setLong(3, now);
-            s.setInt(4, points.size());
-            s.setLong(5, points.get(0).period().index());
-            s.setLong(6, points.get(points.size() - 1).period().index());
-            s.executeUpdate();
-        }
-        try (PreparedStatement s = c.prepareStatement("INSERT INTO observation (series_id, version, period_index,"
-                + " value) VALUES (?, ?, ?, ?)")) {
-            for (Point point : points) {
-                s.setLong(1, id);
-                s.setInt(2, version);
-                s.setLong(3, point.period().index());
-                s.setDouble(4, point.value());
-                s.addBatch();
-            }
+        try (PreparedStatement s = c.prepareStatement(INSERT_VERSION)) {
+            addVersion(s, id, version, now, points.size(), points.get(0).period().index(),
+                    points.get(points.size() - 1).period().index(), PackedPoints.pack(points));
             s.executeBatch();
         }
+    }
+
+    private static void addVersion(PreparedStatement s, long id, int version, long now, int count, long first,
+                                   long last, byte[] points) throws SQLException {
+        s.setLong(1, id);
+        s.setInt(2, version);
+        s.setLong(3, now);
+        s.setInt(4, count);
+        s.setLong(5, first);
+        s.setLong(6, last);
+        s.setBytes(7, points);
+        s.addBatch();
     }
 }

@@ -22,9 +22,8 @@ final class SeriesRows {
     static final String SELECT_VERSIONS = "SELECT version, created_at, observation_count, first_period, last_period"
             + " FROM series_version WHERE series_id = ? ORDER BY version";
 
-    static final String SELECT_VERSION = "SELECT v.created_at, o.period_index, o.value FROM series_version v"
-            + " JOIN observation o ON o.series_id = v.series_id AND o.version = v.version"
-            + " WHERE v.series_id = ? AND v.version = ? ORDER BY o.period_index";
+    static final String SELECT_VERSION = "SELECT created_at, points FROM series_version"
+            + " WHERE series_id = ? AND version = ?";
 
     private SeriesRows() {
     }
@@ -62,11 +61,11 @@ final class SeriesRows {
 
     static SeriesVersion version(ResultSet rs, SeriesSummary summary, int version) throws SQLException {
         try (rs) {
-            List<Point> points = new ArrayList<>();
+            List<Point> points = List.of();
             long createdAt = 0;
-            while (rs.next()) {
+            if (rs.next()) {
                 createdAt = rs.getLong("created_at");
-                points.add(new Point(new Period(summary.frequency(), rs.getLong("period_index")), rs.getDouble("value")));
+                points = PackedPoints.unpack(rs.getBytes("points"), summary.frequency());
             }
             return new SeriesVersion(summary.id(), summary.name(), version, summary.frequency(), instant(createdAt),
                     points);

@@ -41,7 +41,7 @@ public enum Access {
             Map.entry("GET /api/audit", ADMIN_READ),
             Map.entry("POST /api/jobs", EDIT), Map.entry("GET /api/jobs/{id}", READ),
             Map.entry("GET /api/jobs/{id}/results", READ),
-            Map.entry("POST /api/series/preview", EDIT),
+            Map.entry("POST /api/series/preview", EDIT), Map.entry("GET /api/upload-progress/{key}", EDIT),
             Map.entry("POST /api/series/{id}/versions/{version}/comparison", READ),
             Map.entry("GET /setup", PUBLIC), Map.entry("GET /b/{token}", PUBLIC));
 

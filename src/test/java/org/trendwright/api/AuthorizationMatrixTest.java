@@ -56,7 +56,7 @@ class AuthorizationMatrixTest {
             Map.entry("POST /api/jobs", Rule.EDITOR), Map.entry("GET /api/jobs/{id}", Rule.MEMBER),
             Map.entry("GET /api/jobs/{id}/results", Rule.MEMBER),
             // The page: the upload dry run, the model comparison (computes, stores nothing), its HTML entry points.
-            Map.entry("POST /api/series/preview", Rule.EDITOR),
+            Map.entry("POST /api/series/preview", Rule.EDITOR), Map.entry("GET /api/upload-progress/{key}", Rule.EDITOR),
             Map.entry("POST /api/series/{id}/versions/{version}/comparison", Rule.MEMBER),
             Map.entry("GET /setup", Rule.OPEN), Map.entry("GET /b/{token}", Rule.OPEN)));
 
@@ -123,7 +123,7 @@ class AuthorizationMatrixTest {
     private String path(String template) {
         boolean deletion = template.startsWith("DELETE");
         return template.substring(template.indexOf(' ') + 1).replace("{token}", briefToken)
-                .replace("{version}", "1").replace("{id}", template.contains("/api/series/") && !deletion
+                .replace("{key}", "no-such-upload-key-0001").replace("{version}", "1").replace("{id}", template.contains("/api/series/") && !deletion
                         ? Long.toString(seriesId) : "999999");
     }
 

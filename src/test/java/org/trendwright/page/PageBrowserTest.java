@@ -121,6 +121,58 @@ class PageBrowserTest {
         browser.screenshot("series-list-tablet");
     }
 
+    /**
+     * The bar follows the server's own report of a multi-series upload, not only the bytes sent.
+     * The server works through 300 series faster than the page polls, so to see its report for
+     * sure the test holds back the upload's answer in the page for 3 s (as a slow network would):
+     * meanwhile the page's polls must find the server done and show its count of stored series.
+     */
+    @Test
+    void the_upload_bar_shows_the_servers_count_of_stored_series() throws Exception {
+        browser.driver.manage().window().setSize(new Dimension(1280, 800));
+        visit("#/upload");
+        browser.find("#file-input").sendKeys(csvFile(wideSeries(300, 12)).toString());
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("preview-summary"), "quarterly"));
+        browser.js("window.barTexts = [];"
+                + "const text = document.getElementById('upload-progress-text');"
+                + "new MutationObserver(() => window.barTexts.push(text.textContent))"
+                + ".observe(text, {childList: true, characterData: true, subtree: true});"
+                + "const add = XMLHttpRequest.prototype.addEventListener;"
+                + "XMLHttpRequest.prototype.addEventListener = function (type, listener) {"
+                + "  if (type !== 'load') return add.call(this, type, listener);"
+                + "  return add.call(this, type, (e) => setTimeout(() => listener.call(this, e), 3000));"
+                + "};");
+        browser.find("#upload-save").click();
+        browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("upload-progress-text"),
+                "Stored 300 series"));
+        browser.screenshot("upload-progress-stored");
+        browser.await(ExpectedConditions.visibilityOfElementLocated(By.cssSelector("#series-table a.series-link")));
+        @SuppressWarnings("unchecked")
+        List<String> texts = (List<String>) browser.js("return window.barTexts;");
+        assertEquals("0% – Sending the file", texts.get(0), texts.toString());
+        assertTrue(texts.contains("100% – Stored 300 series"), texts.toString());
+        assertEquals("100% – 300 series saved", texts.get(texts.size() - 1), texts.toString());
+        List<Integer> percents = texts.stream().map(t -> Integer.parseInt(t.substring(0, t.indexOf('%')))).toList();
+        for (int i = 1; i < percents.size(); i++) {
+            assertTrue(percents.get(i) >= percents.get(i - 1), "the bar went back: " + texts);
+        }
+    }
+
+    /** A wide CSV of {@code count} quarterly series (invented values) of {@code length} quarters. */
+    private static String wideSeries(int count, int length) {
+        StringBuilder csv = new StringBuilder("period");
+        for (int s = 0; s < count; s++) {
+            csv.append(",series ").append(s);
+        }
+        for (int t = 0; t < length; t++) {
+            csv.append('\n').append(2016 + t / 4).append("-Q").append(t % 4 + 1);
+            for (int s = 0; s < count; s++) {
+                csv.append(',').append(100 + s + t);
+            }
+        }
+        return csv.append('\n').toString();
+    }
+
     @Test
     void shows_a_series_named_like_markup_as_text_and_runs_nothing() throws IOException {
         String name = "<img src=x onerror=window.__pwned=1>";

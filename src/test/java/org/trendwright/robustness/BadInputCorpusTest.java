@@ -36,7 +36,7 @@ import org.trendwright.testing.RunningServer;
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
 class BadInputCorpusTest {
 
-    private static final String[] TABLES = {"series", "series_version", "observation", "fit_result"};
+    private static final String[] TABLES = {"series", "series_version", "upload", "fit_result"};
 
     @Parameter
     FreshStore.Kind kind;

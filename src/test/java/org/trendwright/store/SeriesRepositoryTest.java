@@ -8,6 +8,7 @@ import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -22,6 +23,7 @@ import org.trendwright.series.Period;
 import org.trendwright.series.Point;
 import org.trendwright.series.SeriesDraft;
 import org.trendwright.series.SeriesVersion;
+import org.trendwright.series.StoredUpload;
 import org.trendwright.series.VersionConflictException;
 import org.trendwright.testing.FreshStore;
 
@@ -69,10 +71,10 @@ class SeriesRepositoryTest {
     @Test
     void stores_values_exactly_and_timestamps_from_the_clock() {
         double awkward = 0.1 + 0.2;
-        SeriesVersion created = repository.createAll(List.of(annual("A", awkward, -1e-300, 1.7976931348623157e308)))
-                .get(0);
-        SeriesVersion read = repository.latest(created.seriesId());
-        assertEquals(created.points(), read.points());
+        SeriesDraft draft = annual("A", awkward, -1e-300, 1.7976931348623157e308, -0.0, Double.MIN_VALUE);
+        long id = repository.createAll(List.of(draft)).series().get(0).id();
+        SeriesVersion read = repository.latest(id);
+        assertEquals(draft.points(), read.points());
         assertEquals(Instant.parse("2025-03-01T12:00:00Z"), read.createdAt());
     }
 
@@ -84,8 +86,31 @@ class SeriesRepositoryTest {
     }
 
     @Test
+    void an_upload_names_the_series_it_created_while_they_exist() {
+        StoredUpload first = repository.createAll(List.of(annual("A", 1, 2), annual("B", 3, 4)));
+        StoredUpload second = repository.createAll(List.of(annual("C", 5, 6)));
+        List<Long> firstIds = first.series().stream().map(s -> s.id()).toList();
+        assertEquals(Optional.of(firstIds), repository.uploadSeries(first.uploadId()));
+        assertEquals(Optional.of(List.of(second.series().get(0).id())), repository.uploadSeries(second.uploadId()));
+        repository.delete(firstIds.get(0), 1);
+        assertEquals(Optional.of(firstIds.subList(1, 2)), repository.uploadSeries(first.uploadId()));
+        assertEquals(Optional.empty(), repository.uploadSeries(second.uploadId() + 1000));
+    }
+
+    @Test
+    void reports_the_series_stored_after_each_batch() {
+        List<SeriesDraft> drafts = new ArrayList<>();
+        for (int i = 0; i < SeriesRepository.BATCH_SIZE * 2 + 5; i++) {
+            drafts.add(annual("S" + i, i, i + 1));
+        }
+        List<Integer> reports = new ArrayList<>();
+        repository.createAll(drafts, reports::add);
+        assertEquals(List.of(100, 200, 205), reports);
+    }
+
+    @Test
     void of_writers_racing_from_the_same_version_exactly_one_wins() throws Exception {
-        long id = repository.createAll(List.of(annual("A", 1, 2))).get(0).seriesId();
+        long id = repository.createAll(List.of(annual("A", 1, 2))).series().get(0).id();
         ExecutorService pool = Executors.newFixedThreadPool(4);
         List<Callable<Integer>> writers = new ArrayList<>();
         for (int w = 0; w < 4; w++) {
