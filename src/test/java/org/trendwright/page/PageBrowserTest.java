@@ -131,7 +131,7 @@ class PageBrowserTest {
     void the_upload_bar_shows_the_servers_count_of_stored_series() throws Exception {
         browser.driver.manage().window().setSize(new Dimension(1280, 800));
         visit("#/upload");
-        browser.find("#file-input").sendKeys(csvFile(wideSeries(300, 12)).toString());
+        browser.find("#file-input").sendKeys(DemoSeries.csvFile(wideSeries(300, 12)).toString());
         browser.await(ExpectedConditions.textToBePresentInElementLocated(By.id("preview-summary"), "quarterly"));
         browser.js("window.barTexts = [];"
                 + "const text = document.getElementById('upload-progress-text');"
