@@ -59,10 +59,23 @@ final class AugmentedRefinement {
      * described above; qr must be the factorisation of exactly these columns.
      */
     static Solution solve(double[][] x, PivotedQr qr, double[] y) {
+        return solve(x, qr, y, MAX_REFINEMENTS);
+    }
+
+    /**
+     * The plain Householder solution (the first step above, without corrections): b = P R^-1 Q1'y and
+     * r = Q2 Q2'y, accurate to about c u (cond(X) + cond(X)^2 ||r|| / (||X|| ||b||)) relative
+     * (Higham 2002, Accuracy and Stability of Numerical Algorithms, 2nd ed., Theorem 20.3).
+     */
+    static Solution plain(double[][] x, PivotedQr qr, double[] y) {
+        return solve(x, qr, y, 0);
+    }
+
+    private static Solution solve(double[][] x, PivotedQr qr, double[] y, int refinements) {
         double[] b = new double[x.length];
         double[] r = new double[y.length];
         double previous = Double.POSITIVE_INFINITY;
-        for (int step = 0; step <= MAX_REFINEMENTS; step++) {
+        for (int step = 0; step <= refinements; step++) {
             double[] db = new double[b.length];
             // From r = 0, b = 0 the augmented residuals are f = y and g = 0 exactly.
             double[] dr = step == 0 ? y.clone() : augmentedResidualF(x, y, r, b);
