@@ -76,7 +76,7 @@ public final class LeastSquares {
      * @throws InvalidSpecificationException when y has the wrong length or a non-finite value
      */
     public static OlsFit fit(Design design, double[] y) {
-        Solved solved = solve(design, y);
+        Solved solved = solve(design, y, false);
         ScaledDesign scaled = solved.scaled();
         double[][] xtxInverse = scaled.unscaledInverse(GramInverse.refined(scaled.columns(), solved.qr()));
         return summarize(design, y, fitted(scaled.columns(), solved.scaledB()), scaled.fitMagnitude(solved.scaledB()),
@@ -94,7 +94,7 @@ public final class LeastSquares {
      * @throws InvalidSpecificationException as {@link #fit}
      */
     public static SumsOfSquares sumsOfSquares(Design design, double[] y) {
-        Solved solved = solve(design, y);
+        Solved solved = solve(design, y, false);
         double centre = design.hasIntercept() ? mean(y) : 0;
         double rss = sumOfSquares(solved.residuals(), 0);
         double tss = sumOfSquares(y, centre);
@@ -103,11 +103,15 @@ public final class LeastSquares {
                 solved.scaled().fitMagnitude(solved.scaledB())));
     }
 
-    /** The refined solution on the scaled columns, with the residuals (exactly 0 for an exact fit). */
+    /** The solution on the scaled columns, with the residuals (exactly 0 for an exact fit). */
     private record Solved(ScaledDesign scaled, PivotedQr qr, double[][] unitR, double[] scaledB, double[] residuals) {
     }
 
-    private static Solved solve(Design design, double[] y) {
+    /**
+     * Checks, scales, factors and solves; with {@code maySkipRefinement} a design whose diagonal ratio is at
+     * most {@link #WELL_CONDITIONED} gets the plain Householder solution (see {@link #estimates}).
+     */
+    private static Solved solve(Design design, double[] y, boolean maySkipRefinement) {
         int n = design.rows();
         int k = design.width();
         checkInput(design, y);
@@ -118,7 +122,9 @@ public final class LeastSquares {
         PivotedQr qr = PivotedQr.factor(scaled.columns());
         double[][] unitR = scaled.unitLengthR(qr);
         scaled.checkRank(unitR);
-        AugmentedRefinement.Solution solution = AugmentedRefinement.solve(scaled.columns(), qr, y);
+        AugmentedRefinement.Solution solution = maySkipRefinement && diagonalRatio(unitR) <= WELL_CONDITIONED
+                ? AugmentedRefinement.plain(scaled.columns(), qr, y)
+                : AugmentedRefinement.solve(scaled.columns(), qr, y);
         double[] scaledB = solution.coefficients();
         double[] residuals = isExactFit(scaled.columns(), y, scaledB, solution.residuals())
                 ? new double[n] : solution.residuals();
@@ -141,23 +147,10 @@ public final class LeastSquares {
      * @throws InvalidSpecificationException as {@link #fit}
      */
     public static Estimates estimates(Design design, double[] y) {
-        int n = design.rows();
-        int k = design.width();
-        checkInput(design, y);
-        if (n <= k) {
-            throw InsufficientDataException.forModel("A regression on " + k + " regressors", k + 1, n);
-        }
-        ScaledDesign scaled = ScaledDesign.of(design);
-        PivotedQr qr = PivotedQr.factor(scaled.columns());
-        double[][] unitR = scaled.unitLengthR(qr);
-        scaled.checkRank(unitR);
-        AugmentedRefinement.Solution solution = diagonalRatio(unitR) <= WELL_CONDITIONED
-                ? AugmentedRefinement.plain(scaled.columns(), qr, y)
-                : AugmentedRefinement.solve(scaled.columns(), qr, y);
-        double[] scaledB = solution.coefficients();
-        double[] residuals = isExactFit(scaled.columns(), y, scaledB, solution.residuals())
-                ? new double[n] : solution.residuals();
-        return new Estimates(scaled.unscaled(scaledB), residuals, sumOfSquares(residuals, 0), n - k);
+        Solved solved = solve(design, y, true);
+        double[] residuals = solved.residuals();
+        return new Estimates(solved.scaled().unscaled(solved.scaledB()), residuals, sumOfSquares(residuals, 0),
+                design.rows() - design.width());
     }
 
     /**
