@@ -80,7 +80,7 @@ public final class LeastSquares {
         ScaledDesign scaled = solved.scaled();
         double[][] xtxInverse = scaled.unscaledInverse(GramInverse.refined(scaled.columns(), solved.qr()));
         return summarize(design, y, fitted(scaled.columns(), solved.scaledB()), scaled.fitMagnitude(solved.scaledB()),
-                solved.residuals(), scaled.unscaled(solved.scaledB()), xtxInverse, conditionNumber(solved.unitR()));
+                solved, scaled.unscaled(solved.scaledB()), xtxInverse, conditionNumber(solved.unitR()));
     }
 
     /**
@@ -96,15 +96,19 @@ public final class LeastSquares {
     public static SumsOfSquares sumsOfSquares(Design design, double[] y) {
         Solved solved = solve(design, y, false);
         double centre = design.hasIntercept() ? mean(y) : 0;
-        double rss = sumOfSquares(solved.residuals(), 0);
+        double rss = solved.residualSumOfSquares();
         double tss = sumOfSquares(y, centre);
         double[] fitted = fitted(solved.scaled().columns(), solved.scaledB());
         return new SumsOfSquares(rss, tss, explainedSumOfSquares(fitted, centre, tss, rss,
                 solved.scaled().fitMagnitude(solved.scaledB())));
     }
 
-    /** The solution on the scaled columns, with the residuals (exactly 0 for an exact fit). */
-    private record Solved(ScaledDesign scaled, PivotedQr qr, double[][] unitR, double[] scaledB, double[] residuals) {
+    /**
+     * The solution on the scaled columns, with the residuals (exactly 0 for an exact fit) and their sum of
+     * squares in double-double arithmetic ({@link #sumOfSquares}).
+     */
+    private record Solved(ScaledDesign scaled, PivotedQr qr, double[][] unitR, double[] scaledB, double[] residuals,
+                          double residualSumOfSquares) {
     }
 
     /**
@@ -126,9 +130,10 @@ public final class LeastSquares {
                 ? AugmentedRefinement.plain(scaled.columns(), qr, y)
                 : AugmentedRefinement.solve(scaled.columns(), qr, y);
         double[] scaledB = solution.coefficients();
-        double[] residuals = isExactFit(scaled.columns(), y, scaledB, solution.residuals())
-                ? new double[n] : solution.residuals();
-        return new Solved(scaled, qr, unitR, scaledB, residuals);
+        double rss = sumOfSquares(solution.residuals(), 0);
+        return isExactFit(scaled.columns(), y, scaledB, rss)
+                ? new Solved(scaled, qr, unitR, scaledB, new double[n], 0)
+                : new Solved(scaled, qr, unitR, scaledB, solution.residuals(), rss);
     }
 
     /**
@@ -148,9 +153,8 @@ public final class LeastSquares {
      */
     public static Estimates estimates(Design design, double[] y) {
         Solved solved = solve(design, y, true);
-        double[] residuals = solved.residuals();
-        return new Estimates(solved.scaled().unscaled(solved.scaledB()), residuals, sumOfSquares(residuals, 0),
-                design.rows() - design.width());
+        return new Estimates(solved.scaled().unscaled(solved.scaledB()), solved.residuals(),
+                solved.residualSumOfSquares(), design.rows() - design.width());
     }
 
     /**
@@ -232,12 +236,13 @@ public final class LeastSquares {
      * {@link #explainedSumOfSquares}.
      */
     private static OlsFit summarize(Design design, double[] y, double[] fitted, double fitMagnitude,
-                                    double[] residuals, double[] b, double[][] xtxInverse, double conditionNumber) {
+                                    Solved solved, double[] b, double[][] xtxInverse, double conditionNumber) {
         int n = y.length;
         int k = b.length;
         int df = n - k;
+        double[] residuals = solved.residuals();
         double centre = design.hasIntercept() ? mean(y) : 0;
-        double rss = sumOfSquares(residuals, 0);
+        double rss = solved.residualSumOfSquares();
         double tss = sumOfSquares(y, centre);
         double ess = explainedSumOfSquares(fitted, centre, tss, rss, fitMagnitude);
         double variance = rss / df;
@@ -289,11 +294,13 @@ public final class LeastSquares {
 
     /**
      * Whether y - X b is exactly 0 in double-double arithmetic. Only a refined residual at or below
-     * the rounding level of y, ||r|| <= u ||y||, can belong to an exact fit, so the n k check runs
-     * only then.
+     * the rounding level of y, ||r||^2 <= u^2 ||y||^2 with ||y||^2 summed in double-double, can belong
+     * to an exact fit, so the n k check runs only then. A plain sum of the y_i^2 is within a factor
+     * 1 + n u of the double-double one (Higham 2002, section 4.2), so a residual above 2 u^2 times the
+     * plain sum is refused at once, with the same answer and without the double-double pass.
      */
-    private static boolean isExactFit(double[][] columns, double[] y, double[] scaledB, double[] refinedResidual) {
-        if (sumOfSquares(refinedResidual, 0) > 0x1p-106 * sumOfSquares(y, 0)) {
+    private static boolean isExactFit(double[][] columns, double[] y, double[] scaledB, double refinedRss) {
+        if (refinedRss > 0x1p-105 * plainSumOfSquares(y) || refinedRss > 0x1p-106 * sumOfSquares(y, 0)) {
             return false;
         }
         for (int i = 0; i < y.length; i++) {
@@ -330,6 +337,14 @@ public final class LeastSquares {
         }
         // P(F > f) = I_{d2/(d2 + d1 f)}(d2/2, d1/2), the regularized incomplete beta function.
         return Beta.regularizedBeta(d2 / (d2 + d1 * f), d2 / 2.0, d1 / 2.0);
+    }
+
+    private static double plainSumOfSquares(double[] values) {
+        double sum = 0;
+        for (double v : values) {
+            sum += v * v;
+        }
+        return sum;
     }
 
     /** The mean, from a sum in double-double arithmetic rounded once. */

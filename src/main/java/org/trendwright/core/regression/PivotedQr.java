@@ -57,12 +57,13 @@ final class PivotedQr {
         }
         double[] tau = new double[k];
         double[][] r = new double[k][k];
+        double[] remaining = new double[k];
         for (int s = 0; s < k; s++) {
-            int chosen = largestRelativeRemainder(a, fullNorm, s);
+            int chosen = largestRelativeRemainder(a, fullNorm, s, remaining);
             swap(a, s, chosen);
             swap(fullNorm, s, chosen);
             swap(pivot, s, chosen);
-            r[s][s] = reflect(a[s], s, tau);
+            r[s][s] = reflect(a[s], s, remaining[chosen], tau);
             for (int j = s + 1; j < k; j++) {
                 applyReflector(a[s], tau[s], s, a[j]);
             }
@@ -169,11 +170,21 @@ final class PivotedQr {
         return inverse;
     }
 
-    private static int largestRelativeRemainder(double[][] a, double[] fullNorm, int s) {
+    /**
+     * The column j >= s whose remaining norm (rows s..n-1) is largest relative to its full norm,
+     * the first on a tie; {@code remaining[j]} receives each remaining norm. Before the first
+     * reflection every remaining norm is the full norm, so step 0 takes column 0 without summing.
+     */
+    private static int largestRelativeRemainder(double[][] a, double[] fullNorm, int s, double[] remaining) {
+        if (s == 0) {
+            remaining[0] = fullNorm[0];
+            return 0;
+        }
         int chosen = s;
         double largest = -1;
         for (int j = s; j < a.length; j++) {
-            double relative = norm(a[j], s) / fullNorm[j];
+            remaining[j] = norm(a[j], s);
+            double relative = remaining[j] / fullNorm[j];
             if (relative > largest) {
                 largest = relative;
                 chosen = j;
@@ -183,12 +194,12 @@ final class PivotedQr {
     }
 
     /**
-     * Turns column x (rows s..n-1) into the Householder vector v with H x = alpha e_s, stores
-     * tau = 2 / v'v and returns alpha = -sign(x_s) ||x||; the sign avoids cancellation in
-     * v_s = x_s - alpha. A zero remainder gives H = I (tau = 0) and alpha = 0.
+     * Turns column x (rows s..n-1), whose norm over those rows is {@code norm}, into the
+     * Householder vector v with H x = alpha e_s, stores tau = 2 / v'v and returns
+     * alpha = -sign(x_s) ||x||; the sign avoids cancellation in v_s = x_s - alpha. A zero remainder
+     * gives H = I (tau = 0) and alpha = 0.
      */
-    private static double reflect(double[] x, int s, double[] tau) {
-        double norm = norm(x, s);
+    private static double reflect(double[] x, int s, double norm, double[] tau) {
         if (norm == 0) {
             tau[s] = 0;
             return 0;

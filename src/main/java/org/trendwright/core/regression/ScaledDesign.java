@@ -13,6 +13,11 @@ import org.trendwright.core.RankDeficientDesignException;
  *
  * <p>Also the home of the rank check, which works on the columns scaled to unit length.
  *
+ * <p>The scaling multiplies by 2^-e rather than calling {@code Math.scalb} per element: an exponent
+ * e of a double lies in [-1023, 1023], so 2^-e is itself a double (2^-1023 a subnormal one), and
+ * {@code Math.scalb} is specified to round as the single multiplication by it does, so both give the
+ * same bits.
+ *
  * <p>Immutable after construction; the arrays are not exposed beyond this package.
  */
 final class ScaledDesign {
@@ -48,9 +53,10 @@ final class ScaledDesign {
             }
             int exponent = Math.getExponent(length);
             scales[j] = Math.scalb(1.0, exponent);
-            lengths[j] = Math.scalb(length, -exponent);
+            double inverseScale = Math.scalb(1.0, -exponent);
+            lengths[j] = length * inverseScale;
             for (int i = 0; i < columns[j].length; i++) {
-                columns[j][i] = Math.scalb(columns[j][i], -exponent);
+                columns[j][i] *= inverseScale;
             }
         }
         return new ScaledDesign(design, columns, lengths, scales);
@@ -147,9 +153,10 @@ final class ScaledDesign {
             return 0;
         }
         int exponent = Math.getExponent(largest);
+        double inverseScale = Math.scalb(1.0, -exponent);
         double sum = 0;
         for (double v : x) {
-            double scaled = Math.scalb(v, -exponent);
+            double scaled = v * inverseScale;
             sum += scaled * scaled;
         }
         return Math.scalb(Math.sqrt(sum), exponent);
