@@ -30,7 +30,22 @@ public record RhoEstimate(double value, double standardError, int degreesOfFreed
             cross += e[t] * e[t - 1];
             lagged += e[t - 1] * e[t - 1];
         }
-        double rho = cross / lagged;
+        return withStandardError(cross / lagged, e, lagged);
+    }
+
+    /**
+     * A given value of rho (such as an extrapolated one) with the standard error the formula above
+     * gives it against residuals e, s_a computed with this rho.
+     */
+    static RhoEstimate withValue(double rho, double[] e) {
+        double lagged = 0;
+        for (int t = 1; t < e.length; t++) {
+            lagged += e[t - 1] * e[t - 1];
+        }
+        return withStandardError(rho, e, lagged);
+    }
+
+    private static RhoEstimate withStandardError(double rho, double[] e, double lagged) {
         double squares = 0;
         for (int t = 1; t < e.length; t++) {
             double a = e[t] - rho * e[t - 1];

@@ -191,6 +191,37 @@ class Ar1GlsTest {
     }
 
     @Test
+    void aitken_extrapolation_is_exact_for_a_linear_iteration_and_refuses_to_leave_the_unit_interval() {
+        // For g(x) = a x + c the errors x_k - x* shrink geometrically by a, and the delta-squared
+        // formula returns x* = c / (1 - a) from any three iterates (Aitken 1926; the textbook property
+        // that motivates it). Here a = 0.9, c = 0.05: x0 = 0, x1 = 0.05, x2 = 0.095, x* = 0.5.
+        assertEquals(0.5, Ar1Gls.aitken(0, 0.05, 0.095), 1e-15);
+        // No x0 yet, a zero second difference, or a point outside (-1, 1): no extrapolation.
+        assertTrue(Double.isNaN(Ar1Gls.aitken(Double.NaN, 0.05, 0.095)));
+        assertTrue(Double.isNaN(Ar1Gls.aitken(0.1, 0.2, 0.3)));
+        assertTrue(Double.isNaN(Ar1Gls.aitken(0, 0.5, 0.75)));
+    }
+
+    @Test
+    void accelerated_iteration_reaches_the_fixed_point_of_a_slowly_converging_plain_iteration() {
+        // Strongly correlated errors make the plain Cochrane-Orcutt map converge slowly; the
+        // fixed-point property (Cochrane & Orcutt 1949: rho reproduces itself from its own
+        // residuals) must hold at the end all the same, to the tolerance asked for.
+        int n = 80;
+        double[] y = Ar1Series.trendPlus(Ar1Series.errors(new SplittableRandom(21), n, 0.95, 1));
+        Ar1GlsFit fit = Ar1Gls.fit(Ar1Series.trendDesign(n), y, Ar1Method.PRAIS_WINSTEN, 1e-12, 100);
+        double[] u = fit.structuralResiduals();
+        double cross = 0;
+        double lagged = 0;
+        for (int t = 1; t < n; t++) {
+            cross += u[t] * u[t - 1];
+            lagged += u[t - 1] * u[t - 1];
+        }
+        assertTrue(fit.converged());
+        assertEquals(cross / lagged, fit.rho().value(), 1e-12);
+    }
+
+    @Test
     void reports_no_convergence_when_the_iteration_cap_stops_it() {
         double[] y = Ar1Series.trendPlus(Ar1Series.errors(new SplittableRandom(9), 100, RHO, 1));
         Ar1GlsFit capped = Ar1Gls.fit(Ar1Series.trendDesign(100), y, Ar1Method.COCHRANE_ORCUTT, 1e-8, 1);
