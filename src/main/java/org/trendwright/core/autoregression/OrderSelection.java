@@ -2,20 +2,19 @@ package org.trendwright.core.autoregression;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.QRDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
 import org.trendwright.core.regression.Design;
+import org.trendwright.core.regression.LeastSquares;
 
 /**
  * Lag-count selection by an information criterion on a common estimation sample (see
  * {@link LagSelection}; Ng & Perron 2005, Oxford Bulletin of Economics and Statistics 67).
  *
  * <p>The candidates are nested: candidate p uses the first m_p columns of the largest design. One
- * Householder QR of the augmented matrix [X | y] = Q R therefore yields every candidate's residual
- * sum of squares: the last column of R holds c = Q'y, and the regression on the first m columns
- * leaves RSS_m = Σ_{j ≥ m} c_j² (Golub & Van Loan 1996, Matrix Computations, 3rd ed., section
- * 5.3.5). That replaces pMax + 1 separate fits by one decomposition; the chosen candidate is then
+ * Householder QR of that design, X = Q R, therefore yields every candidate's residual sum of
+ * squares: with c = Q'y the regression on the first m columns leaves RSS_m = Σ_{j ≥ m} c_j²
+ * (Golub & Van Loan 1996, Matrix Computations, 3rd ed., section 5.3.5;
+ * {@link LeastSquares#nestedResidualSumsOfSquares}). That replaces pMax + 1 separate fits by one
+ * decomposition; the chosen candidate is then
  * fitted in full by {@link org.trendwright.core.regression.LeastSquares}. The criteria follow the
  * conventions of {@link org.trendwright.core.regression.OlsFit}: with n rows and k coefficients,
  * ln L = −n/2 (ln 2π + ln(RSS/n) + 1), AIC = −2 ln L + 2(k + 1), BIC = −2 ln L + ln(n)(k + 1).
@@ -34,26 +33,10 @@ public final class OrderSelection {
      * widths[p] columns of {@code largest}.
      */
     public static List<CandidateOrder> compareNested(Design largest, double[] y, int[] widths) {
-        int n = largest.rows();
-        int k = largest.width();
-        double[][] augmented = new double[n][k + 1];
-        for (int j = 0; j < k; j++) {
-            double[] column = largest.column(j);
-            for (int i = 0; i < n; i++) {
-                augmented[i][j] = column[i];
-            }
-        }
-        for (int i = 0; i < n; i++) {
-            augmented[i][k] = y[i];
-        }
-        RealMatrix r = new QRDecomposition(new Array2DRowRealMatrix(augmented, false)).getR();
+        double[] rss = LeastSquares.nestedResidualSumsOfSquares(largest, y, widths);
         List<CandidateOrder> candidates = new ArrayList<>(widths.length);
         for (int p = 0; p < widths.length; p++) {
-            double rss = 0;
-            for (int j = widths[p]; j <= Math.min(k, n - 1); j++) {
-                rss += r.getEntry(j, k) * r.getEntry(j, k);
-            }
-            candidates.add(candidate(p, n, widths[p], rss));
+            candidates.add(candidate(p, largest.rows(), widths[p], rss[p]));
         }
         return candidates;
     }

@@ -3,8 +3,6 @@ package org.trendwright.core.regression;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.SingularValueDecomposition;
 import org.apache.commons.math3.special.Beta;
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.InvalidSpecificationException;
@@ -80,7 +78,8 @@ public final class LeastSquares {
         ScaledDesign scaled = solved.scaled();
         double[][] xtxInverse = scaled.unscaledInverse(GramInverse.refined(scaled.columns(), solved.qr()));
         return summarize(design, y, fitted(scaled.columns(), solved.scaledB()), scaled.fitMagnitude(solved.scaledB()),
-                solved, scaled.unscaled(solved.scaledB()), xtxInverse, conditionNumber(solved.unitR()));
+                solved, scaled.unscaled(solved.scaledB()), xtxInverse,
+                SmallSingularValues.conditionNumber(solved.unitR()));
     }
 
     /**
@@ -158,6 +157,45 @@ public final class LeastSquares {
     }
 
     /**
+     * The residual sums of squares of nested regressions: for each p, y on the first
+     * {@code widths[p]} columns of {@code largest}. One Householder QR of the design in its own
+     * column order (no pivoting), X = Q R, serves them all: with c = Q'y, the regression on the
+     * first m columns leaves RSS_m = sum_{j >= m} c_j^2 (Golub &amp; Van Loan 1996, Matrix
+     * Computations, 3rd ed., section 5.3.5). A column that adds nothing to the ones before it
+     * (R_jj = 0, see {@link PivotedQr#inColumnOrder}) leaves its c_j^2 in the residual, so RSS stays
+     * unchanged; no rank check is made, and the columns are used as given (no scaling).
+     *
+     * @throws InvalidSpecificationException when y has the wrong length or a non-finite value, or a
+     *                                       width is negative or above the design's
+     */
+    public static double[] nestedResidualSumsOfSquares(Design largest, double[] y, int[] widths) {
+        checkInput(largest, y);
+        PivotedQr qr = PivotedQr.inColumnOrder(largest.columns().toArray(new double[0][]));
+        double[] c = y.clone();
+        qr.applyQTranspose(c);
+        double[] tail = new double[c.length + 1];
+        for (int j = c.length - 1; j >= 0; j--) {
+            tail[j] = tail[j + 1] + c[j] * c[j];
+        }
+        // A column that added nothing (R_jj = 0) leaves its c_j in the residual.
+        int k = largest.width();
+        double[] unexplained = new double[k + 1];
+        for (int j = 0; j < k; j++) {
+            boolean addedNothing = j < c.length && qr.r(j, j) == 0;
+            unexplained[j + 1] = unexplained[j] + (addedNothing ? c[j] * c[j] : 0);
+        }
+        double[] rss = new double[widths.length];
+        for (int p = 0; p < widths.length; p++) {
+            if (widths[p] < 0 || widths[p] > k) {
+                throw new InvalidSpecificationException("Nested regression " + p + " asks for " + widths[p]
+                        + " columns of a design with " + k + ".");
+            }
+            rss[p] = tail[Math.min(widths[p], c.length)] + unexplained[widths[p]];
+        }
+        return rss;
+    }
+
+    /**
      * The point estimates of a least-squares fit, equal to those {@link #fit} reports.
      *
      * @param coefficients              b, in the design's column order
@@ -217,11 +255,6 @@ public final class LeastSquares {
                 }
             }
         }
-    }
-
-    /** The 2-norm condition number of the unit-length design, from the singular values of its R. */
-    private static double conditionNumber(double[][] unitR) {
-        return new SingularValueDecomposition(new Array2DRowRealMatrix(unitR, false)).getConditionNumber();
     }
 
     /**

@@ -46,6 +46,21 @@ final class PivotedQr {
      * plain sums of squares can neither overflow nor underflow.
      */
     static PivotedQr factor(double[][] columns) {
+        return factor(columns, true);
+    }
+
+    /**
+     * Factorises without pivoting, X = Q R with the columns in their own order, so that the first m
+     * columns of Q span the first m columns of X for every m (as nested regressions need). Columns
+     * may be zero or depend on the ones before them, and there may be more columns than rows: a
+     * reflection with nothing (or only rounding noise, see {@link #negligibleAsZero}) left to
+     * reflect is the identity.
+     */
+    static PivotedQr inColumnOrder(double[][] columns) {
+        return factor(columns, false);
+    }
+
+    private static PivotedQr factor(double[][] columns, boolean pivoting) {
         int k = columns.length;
         double[][] a = new double[k][];
         double[] fullNorm = new double[k];
@@ -59,7 +74,12 @@ final class PivotedQr {
         double[][] r = new double[k][k];
         double[] remaining = new double[k];
         for (int s = 0; s < k; s++) {
-            int chosen = largestRelativeRemainder(a, fullNorm, s, remaining);
+            int chosen = s;
+            if (pivoting) {
+                chosen = largestRelativeRemainder(a, fullNorm, s, remaining);
+            } else {
+                remaining[s] = negligibleAsZero(norm(a[s], s), fullNorm[s]);
+            }
             swap(a, s, chosen);
             swap(fullNorm, s, chosen);
             swap(pivot, s, chosen);
@@ -70,7 +90,7 @@ final class PivotedQr {
         }
         // Row s of R lies in row s of the later columns, read once they have stopped moving.
         for (int j = 1; j < k; j++) {
-            for (int i = 0; i < j; i++) {
+            for (int i = 0; i < Math.min(j, a[j].length); i++) {
                 r[i][j] = a[j][i];
             }
         }
@@ -191,6 +211,16 @@ final class PivotedQr {
             }
         }
         return chosen;
+    }
+
+    /**
+     * A remaining norm at most {@link LeastSquares#RANK_TOLERANCE} times the column's full norm is
+     * rounding noise: the column is a linear combination of the ones before it. Reflecting that
+     * noise would remove an arbitrary direction, so it counts as 0 (no reflection). The pivoted
+     * factorisation needs no such rule: {@link ScaledDesign#checkRank} refuses those designs.
+     */
+    private static double negligibleAsZero(double remaining, double fullNorm) {
+        return remaining <= LeastSquares.RANK_TOLERANCE * fullNorm ? 0 : remaining;
     }
 
     /**
