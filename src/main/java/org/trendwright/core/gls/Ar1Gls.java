@@ -1,7 +1,5 @@
 package org.trendwright.core.gls;
 
-import java.util.ArrayList;
-import java.util.List;
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.InvalidSpecificationException;
 import org.trendwright.core.diagnostics.DurbinWatson;
@@ -191,11 +189,13 @@ public final class Ar1Gls {
 
     /** The quasi-differenced design; no longer "with intercept", since the constant becomes 1 - rho. */
     static Design transform(Design design, double rho, Ar1Method method) {
-        List<double[]> columns = new ArrayList<>(design.width());
-        for (int j = 0; j < design.width(); j++) {
-            columns.add(transform(design.column(j), rho, method));
+        if (method == Ar1Method.PRAIS_WINSTEN) {
+            double firstWeight = Math.sqrt(1 - rho * rho);
+            return Design.generate(design.rows(), design.names(), false, (i, j) -> i == 0
+                    ? firstWeight * design.get(0, j) : design.get(i, j) - rho * design.get(i - 1, j));
         }
-        return new Design(columns, design.names(), false);
+        return Design.generate(design.rows() - 1, design.names(), false,
+                (i, j) -> design.get(i + 1, j) - rho * design.get(i, j));
     }
 
     /** v*_t = v_t - rho v_{t-1}, t = 2..n, preceded for Prais-Winsten by v*_1 = sqrt(1 - rho^2) v_1. */

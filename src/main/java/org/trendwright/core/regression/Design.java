@@ -7,58 +7,122 @@ import org.trendwright.core.InvalidSpecificationException;
 
 /**
  * A regression design matrix X (n rows, k columns), kept column by column with a name for every
- * column. Immutable and thread-safe: columns are copied in and out.
- *
- * @param columns      the k regressors, each of length n
- * @param names        a name for each regressor, shown beside its coefficient
- * @param hasIntercept true when one column is the constant 1 (R-squared and F are then centred)
+ * column. Immutable and thread-safe: columns handed in are copied, columns handed out are copies,
+ * so the arrays inside are never seen outside and designs derived from one another may share them.
+ * Designs built by {@link #generate} or derived ({@link #rowRange}, {@link #withColumns}) fill
+ * arrays of their own and skip the copy, which matters to callers that build thousands of small
+ * designs (rolling forecasts, GLS iterations).
  */
-public record Design(List<double[]> columns, List<String> names, boolean hasIntercept) {
+public final class Design {
 
-    public Design {
-        if (columns.size() != names.size()) {
-            throw new InvalidSpecificationException(columns.size() + " columns but " + names.size() + " names.");
+    private final double[][] columns;
+    private final List<String> names;
+    private final boolean hasIntercept;
+
+    /**
+     * A design from the given columns, which are copied.
+     *
+     * @param columns      the k regressors, each of length n
+     * @param names        a name for each regressor, shown beside its coefficient
+     * @param hasIntercept true when one column is the constant 1 (R-squared and F are then centred)
+     * @throws InvalidSpecificationException when there are no columns, the counts of columns and
+     *                                       names differ, or the columns differ in length
+     */
+    public Design(List<double[]> columns, List<String> names, boolean hasIntercept) {
+        this(copies(columns), names, hasIntercept);
+    }
+
+    /** Takes ownership of {@code owned}: no caller may keep a reference to its arrays. */
+    private Design(double[][] owned, List<String> names, boolean hasIntercept) {
+        if (owned.length != names.size()) {
+            throw new InvalidSpecificationException(owned.length + " columns but " + names.size() + " names.");
         }
-        if (columns.isEmpty()) {
+        if (owned.length == 0) {
             throw new InvalidSpecificationException("A regression needs at least one regressor.");
         }
-        int n = columns.get(0).length;
-        List<double[]> copies = new ArrayList<>(columns.size());
-        for (int j = 0; j < columns.size(); j++) {
-            double[] column = columns.get(j);
-            if (column.length != n) {
-                throw new InvalidSpecificationException("Regressor '" + names.get(j) + "' has " + column.length
+        int n = owned[0].length;
+        for (int j = 0; j < owned.length; j++) {
+            if (owned[j].length != n) {
+                throw new InvalidSpecificationException("Regressor '" + names.get(j) + "' has " + owned[j].length
                         + " rows where the first has " + n + ".");
             }
-            copies.add(column.clone());
         }
-        columns = List.copyOf(copies);
-        names = List.copyOf(names);
+        this.columns = owned;
+        this.names = List.copyOf(names);
+        this.hasIntercept = hasIntercept;
+    }
+
+    /** The value of regressor {@code column} in observation {@code row} (both 0-based). */
+    @FunctionalInterface
+    public interface Cell {
+        double at(int row, int column);
+    }
+
+    /**
+     * A design of {@code rows} rows whose element (i, j) is {@code cell.at(i, j)}, filled column by
+     * column into arrays the design owns.
+     *
+     * @throws InvalidSpecificationException when there are no names (no columns)
+     */
+    public static Design generate(int rows, List<String> names, boolean hasIntercept, Cell cell) {
+        double[][] filled = new double[names.size()][rows];
+        for (int j = 0; j < filled.length; j++) {
+            for (int i = 0; i < rows; i++) {
+                filled[j][i] = cell.at(i, j);
+            }
+        }
+        return new Design(filled, names, hasIntercept);
+    }
+
+    private static double[][] copies(List<double[]> columns) {
+        double[][] copies = new double[columns.size()][];
+        for (int j = 0; j < copies.length; j++) {
+            copies[j] = columns.get(j).clone();
+        }
+        return copies;
     }
 
     /** Number of observations (rows). */
     public int rows() {
-        return columns.get(0).length;
+        return columns[0].length;
     }
 
     /** Number of regressors (columns). */
     public int width() {
-        return columns.size();
+        return columns.length;
+    }
+
+    /** The regressors' names, in column order. */
+    public List<String> names() {
+        return names;
+    }
+
+    /** Whether one column is the constant 1. */
+    public boolean hasIntercept() {
+        return hasIntercept;
     }
 
     /** Element x[i][j]: observation i (0-based) of regressor j. */
     public double get(int i, int j) {
-        return columns.get(j)[i];
+        return columns[j][i];
     }
 
     /** A copy of column j. */
     public double[] column(int j) {
-        return columns.get(j).clone();
+        return columns[j].clone();
     }
 
-    @Override
+    /** Copies of the columns. */
     public List<double[]> columns() {
-        return columns.stream().map(double[]::clone).toList();
+        return Arrays.stream(columns).map(double[]::clone).toList();
+    }
+
+    /**
+     * The design's own column arrays, for this package's factorisations, which copy what they
+     * change: callers must neither modify these arrays nor hand them on.
+     */
+    double[][] sharedColumns() {
+        return columns;
     }
 
     /** The matrix as rows, x[i] = (x_i1, ..., x_ik). */
@@ -67,7 +131,7 @@ public record Design(List<double[]> columns, List<String> names, boolean hasInte
         int k = width();
         double[][] rows = new double[n][k];
         for (int j = 0; j < k; j++) {
-            double[] column = columns.get(j);
+            double[] column = columns[j];
             for (int i = 0; i < n; i++) {
                 rows[i][j] = column[i];
             }
@@ -77,14 +141,22 @@ public record Design(List<double[]> columns, List<String> names, boolean hasInte
 
     /** The rows {@code from} (inclusive) to {@code to} (exclusive), for holdout and rolling fits. */
     public Design rowRange(int from, int to) {
-        List<double[]> sliced = columns.stream().map(c -> Arrays.copyOfRange(c, from, to)).toList();
+        double[][] sliced = new double[columns.length][];
+        for (int j = 0; j < sliced.length; j++) {
+            sliced[j] = Arrays.copyOfRange(columns[j], from, to);
+        }
         return new Design(sliced, names, hasIntercept);
     }
 
-    /** This design with extra regressors appended on the right (as auxiliary regressions need). */
+    /**
+     * This design with extra regressors (copied) appended on the right, as auxiliary regressions
+     * need; the existing columns are shared, since no design changes or hands out its arrays.
+     */
     public Design withColumns(List<double[]> extra, List<String> extraNames) {
-        List<double[]> all = new ArrayList<>(columns);
-        all.addAll(extra);
+        double[][] all = Arrays.copyOf(columns, columns.length + extra.size());
+        for (int j = 0; j < extra.size(); j++) {
+            all[columns.length + j] = extra.get(j).clone();
+        }
         List<String> allNames = new ArrayList<>(names);
         allNames.addAll(extraNames);
         return new Design(all, allNames, hasIntercept);
@@ -95,12 +167,7 @@ public record Design(List<double[]> columns, List<String> names, boolean hasInte
         if (!(other instanceof Design d) || hasIntercept != d.hasIntercept || !names.equals(d.names)) {
             return false;
         }
-        for (int j = 0; j < columns.size(); j++) {
-            if (!Arrays.equals(columns.get(j), d.columns.get(j))) {
-                return false;
-            }
-        }
-        return true;
+        return Arrays.deepEquals(columns, d.columns);
     }
 
     @Override

@@ -170,7 +170,7 @@ public final class LeastSquares {
      */
     public static double[] nestedResidualSumsOfSquares(Design largest, double[] y, int[] widths) {
         checkInput(largest, y);
-        PivotedQr qr = PivotedQr.inColumnOrder(largest.columns().toArray(new double[0][]));
+        PivotedQr qr = PivotedQr.inColumnOrder(largest.sharedColumns());
         double[] c = y.clone();
         qr.applyQTranspose(c);
         double[] tail = new double[c.length + 1];
@@ -247,11 +247,12 @@ public final class LeastSquares {
                         + "; least squares needs finite numbers.");
             }
         }
-        for (int j = 0; j < design.width(); j++) {
-            for (int i = 0; i < design.rows(); i++) {
-                if (!Double.isFinite(design.get(i, j))) {
+        double[][] columns = design.sharedColumns();
+        for (int j = 0; j < columns.length; j++) {
+            for (int i = 0; i < columns[j].length; i++) {
+                if (!Double.isFinite(columns[j][i])) {
                     throw new InvalidSpecificationException("Regressor '" + design.names().get(j) + "' row " + (i + 1)
-                            + " is " + design.get(i, j) + "; least squares needs finite numbers.");
+                            + " is " + columns[j][i] + "; least squares needs finite numbers.");
                 }
             }
         }

@@ -42,11 +42,12 @@ final class ScaledDesign {
      */
     static ScaledDesign of(Design design) {
         int k = design.width();
-        double[][] columns = design.columns().toArray(new double[0][]);
+        double[][] source = design.sharedColumns();
+        double[][] columns = new double[k][design.rows()];
         double[] lengths = new double[k];
         double[] scales = new double[k];
         for (int j = 0; j < k; j++) {
-            double length = norm(columns[j]);
+            double length = norm(source[j]);
             if (length == 0) {
                 throw new RankDeficientDesignException("Regressor '" + design.names().get(j)
                         + "' is zero in every row, so its coefficient cannot be estimated; drop it from the model.");
@@ -56,7 +57,7 @@ final class ScaledDesign {
             double inverseScale = Math.scalb(1.0, -exponent);
             lengths[j] = length * inverseScale;
             for (int i = 0; i < columns[j].length; i++) {
-                columns[j][i] *= inverseScale;
+                columns[j][i] = source[j][i] * inverseScale;
             }
         }
         return new ScaledDesign(design, columns, lengths, scales);

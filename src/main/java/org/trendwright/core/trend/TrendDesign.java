@@ -47,34 +47,36 @@ record TrendDesign(TrendSpec spec, int periodsPerYear, int firstSeason) {
     /** The regressor row x(t) for period index t. */
     double[] row(int t) {
         double[] row = new double[width()];
-        row[0] = 1;
-        row[1] = t;
-        int next = 2;
-        if (spec.shape() == TrendShape.QUADRATIC) {
-            row[next++] = (double) t * t;
-        }
-        if (spec.seasonalDummies()) {
-            int season = Math.floorMod(firstSeason - 1 + t - 1, periodsPerYear) + 1;
-            if (season > 1) {
-                row[next + season - 2] = 1;
-            }
+        for (int j = 0; j < row.length; j++) {
+            row[j] = regressor(t, j);
         }
         return row;
     }
 
     /** The design for the observed periods. */
     Design design(int[] times) {
-        int k = width();
-        List<double[]> columns = new ArrayList<>(k);
-        for (int j = 0; j < k; j++) {
-            columns.add(new double[times.length]);
+        return Design.generate(times.length, names(), true, (i, j) -> regressor(times[i], j));
+    }
+
+    /**
+     * Regressor j at period index t: 1 for the constant, t, t^2 for the quadratic shape, then the
+     * 0/1 dummy of each season after the first.
+     */
+    private double regressor(int t, int j) {
+        if (j == 0) {
+            return 1;
         }
-        for (int i = 0; i < times.length; i++) {
-            double[] row = row(times[i]);
-            for (int j = 0; j < k; j++) {
-                columns.get(j)[i] = row[j];
+        if (j == 1) {
+            return t;
+        }
+        int firstDummy = 2;
+        if (spec.shape() == TrendShape.QUADRATIC) {
+            if (j == 2) {
+                return (double) t * t;
             }
+            firstDummy = 3;
         }
-        return new Design(columns, names(), true);
+        int season = Math.floorMod(firstSeason - 1 + t - 1, periodsPerYear) + 1;
+        return season == j - firstDummy + 2 ? 1 : 0;
     }
 }
