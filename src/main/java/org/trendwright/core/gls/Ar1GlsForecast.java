@@ -2,8 +2,8 @@ package org.trendwright.core.gls;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.distribution.TDistribution;
 import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.StudentT;
 import org.trendwright.core.forecast.Forecast;
 import org.trendwright.core.forecast.ForecastPoint;
 import org.trendwright.core.forecast.PredictionInterval;
@@ -56,15 +56,14 @@ public final class Ar1GlsForecast {
      */
     public static Forecast forecast(Ar1GlsFit fit, double[][] futureRows, int[] futureTimes, double... levels) {
         checkInput(fit, futureRows, futureTimes, levels);
-        TDistribution t = new TDistribution(null, fit.residualDegreesOfFreedom());
         List<ForecastPoint> points = new ArrayList<>(futureRows.length);
         for (int i = 0; i < futureRows.length; i++) {
-            points.add(point(fit, futureRows[i], futureTimes[i], t, levels));
+            points.add(point(fit, futureRows[i], futureTimes[i], levels));
         }
         return new Forecast("Regression with AR(1) errors, " + fit.method().label() + " GLS", points);
     }
 
-    private static ForecastPoint point(Ar1GlsFit fit, double[] x, int time, TDistribution t, double[] levels) {
+    private static ForecastPoint point(Ar1GlsFit fit, double[] x, int time, double[] levels) {
         int h = time - fit.observations();
         double rho = fit.rho().value();
         double carried = Math.pow(rho, h);
@@ -80,7 +79,7 @@ public final class Ar1GlsForecast {
         double se = Math.sqrt(s2 * shockSum(rho, h) + quadraticForm(fit.coefficientCovariance(), xt));
         List<PredictionInterval> intervals = new ArrayList<>(levels.length);
         for (double level : levels) {
-            double half = t.inverseCumulativeProbability((1 + level) / 2) * se;
+            double half = StudentT.quantile(fit.residualDegreesOfFreedom(), (1 + level) / 2) * se;
             intervals.add(new PredictionInterval(level, value - half, value + half));
         }
         return new ForecastPoint(time, h, value, se, intervals);

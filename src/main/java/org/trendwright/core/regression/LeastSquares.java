@@ -6,6 +6,7 @@ import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.special.Beta;
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.StudentT;
 
 /**
  * Ordinary least squares by Householder QR with column pivoting, never by the normal equations.
@@ -352,7 +353,7 @@ public final class LeastSquares {
     private static List<Coefficient> coefficients(Design design, double[] b, double[][] xtxInverse,
                                                   double variance, int df) {
         TDistribution t = new TDistribution(null, df);
-        double critical = t.inverseCumulativeProbability(0.975);
+        double critical = StudentT.quantile(df, 0.975);
         List<Coefficient> coefficients = new ArrayList<>(b.length);
         for (int j = 0; j < b.length; j++) {
             double se = Math.sqrt(variance * xtxInverse[j][j]);

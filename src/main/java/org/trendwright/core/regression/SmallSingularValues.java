@@ -11,7 +11,9 @@ package org.trendwright.core.regression;
  *   cos = 1 / sqrt(1 + t^2),  sin = t cos,
  *   a_p := cos a_p - sin a_q,  a_q := sin a_p + cos a_q,
  * </pre>
- * and a pair counts as orthogonal once |c| &lt;= u sqrt(a b) with u the unit round-off. The method
+ * and a pair counts as orthogonal once |c| &lt;= k u sqrt(a b), with u the unit round-off and k the
+ * order: the rounding error of the k-term dot product c itself (Higham 2002, section 3.1), below
+ * which a rotation only stirs rounding noise and the sweeps would never end. The method
  * computes every singular value, the smallest included, to high relative accuracy (Demmel &amp;
  * Veselić 1992, "Jacobi's method is more accurate than QR", SIAM J. Matrix Anal. Appl. 13(4),
  * 1204-1245), which is what a condition number needs.
@@ -85,7 +87,7 @@ final class SmallSingularValues {
         double a = dot(x, x);
         double b = dot(y, y);
         double c = dot(x, y);
-        if (Math.abs(c) <= UNIT_ROUNDOFF * Math.sqrt(a * b)) {
+        if (Math.abs(c) <= x.length * UNIT_ROUNDOFF * Math.sqrt(a * b)) {
             return false;
         }
         double zeta = (b - a) / (2 * c);

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.StudentT;
 import org.trendwright.core.regression.Coefficient;
 import org.trendwright.core.regression.OlsFit;
 
@@ -144,7 +145,7 @@ public final class NeweyWest {
 
     private static List<Coefficient> coefficients(OlsFit fit, double[][] covariance, int df) {
         TDistribution t = new TDistribution(null, df);
-        double critical = t.inverseCumulativeProbability(0.975);
+        double critical = StudentT.quantile(df, 0.975);
         List<Coefficient> result = new ArrayList<>(covariance.length);
         for (int j = 0; j < covariance.length; j++) {
             Coefficient ols = fit.coefficients().get(j);

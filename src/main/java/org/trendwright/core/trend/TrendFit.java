@@ -3,9 +3,9 @@ package org.trendwright.core.trend;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import org.apache.commons.math3.distribution.TDistribution;
 import org.trendwright.core.InvalidSpecificationException;
 import org.trendwright.core.Observations;
+import org.trendwright.core.StudentT;
 import org.trendwright.core.TestResult;
 import org.trendwright.core.forecast.Forecast;
 import org.trendwright.core.forecast.ForecastPoint;
@@ -75,10 +75,10 @@ public record TrendFit(TrendSpec spec, Observations series, OlsFit ols, Optional
     private TrendForecast predictAll(int[] times, List<Double> levels) {
         levels.forEach(TestResult::checkLevel);
         TrendDesign design = TrendDesign.of(spec, series);
-        TDistribution t = new TDistribution(null, ols.residualDegreesOfFreedom());
         List<ForecastPoint> points = new ArrayList<>(times.length);
         List<BackTransformed> back = new ArrayList<>();
-        double[] quantiles = levels.stream().mapToDouble(level -> t.inverseCumulativeProbability(1 - (1 - level) / 2))
+        double[] quantiles = levels.stream()
+                .mapToDouble(level -> StudentT.quantile(ols.residualDegreesOfFreedom(), 1 - (1 - level) / 2))
                 .toArray();
         for (int time : times) {
             double[] x = design.row(time);
