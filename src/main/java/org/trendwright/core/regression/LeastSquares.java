@@ -30,7 +30,9 @@ import org.trendwright.core.StudentT;
  *       double-double arithmetic (Björck 1967, BIT 7; see {@link AugmentedRefinement}), which
  *       also removes the cond(X)^2 ||r|| error term of large-residual problems;</li>
  *   <li>(X'X)^-1 = P R^-1 R^-T P' comes from the triangular factor and is refined against X'X
- *       accumulated in double-double arithmetic ({@link GramInverse});</li>
+ *       accumulated in double-double arithmetic ({@link GramInverse}), unless the pivoted
+ *       unit-column R has a diagonal ratio of at most {@value #WELL_CONDITIONED}, where the
+ *       unrefined inverse is already accurate to about cond(X) u, below 1e-13 relative;</li>
  *   <li>fitted values, residuals and the sums of squares are accumulated in double-double
  *       arithmetic (Ogita, Rump &amp; Oishi 2005, SIAM J. Sci. Comput. 26).</li>
  * </ol>
@@ -77,7 +79,8 @@ public final class LeastSquares {
     public static OlsFit fit(Design design, double[] y) {
         Solved solved = solve(design, y, false);
         ScaledDesign scaled = solved.scaled();
-        double[][] xtxInverse = scaled.unscaledInverse(GramInverse.refined(scaled.columns(), solved.qr()));
+        double[][] xtxInverse = scaled.unscaledInverse(diagonalRatio(solved.unitR()) <= WELL_CONDITIONED
+                ? solved.qr().inverseGram() : GramInverse.refined(scaled.columns(), solved.qr()));
         return summarize(design, y, fitted(scaled.columns(), solved.scaledB()), scaled.fitMagnitude(solved.scaledB()),
                 solved, scaled.unscaled(solved.scaledB()), xtxInverse,
                 SmallSingularValues.conditionNumber(solved.unitR()));
