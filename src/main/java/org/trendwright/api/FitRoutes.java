@@ -58,7 +58,8 @@ final class FitRoutes {
         SeriesInput named = new SeriesInput(input.name() == null ? POSTED_NAME : input.name(), input.where(),
                 input.changes());
         SeriesDraft draft = SeriesAssembly.create(named, options);
-        ctx.json(gate.run(draft.points().size(),
-                () -> fits.stateless(draft.name(), draft.frequency(), draft.points(), fit)));
+        String json = gate.run(draft.points().size(),
+                () -> fits.stateless(draft.name(), draft.frequency(), draft.points(), fit));
+        ctx.contentType("application/json").result(json);
     }
 }

@@ -88,10 +88,15 @@ final class FitService {
         }
     }
 
-    FitResponse stateless(String name, Frequency frequency, List<Point> points, FitRequest raw) {
+    /**
+     * The fit of a posted series as JSON text, computed every time and stored nowhere. It is
+     * serialised here, inside the caller's turn at the fit gate, so that the gate bounds all of a
+     * fit's CPU work and fits finish in the order they were admitted.
+     */
+    String stateless(String name, Frequency frequency, List<Point> points, FitRequest raw) {
         FitRequest request = raw.normalized();
         FitResponse.SeriesRef ref = ref(null, null, name, frequency, points);
-        return timed(family(request.model()), "none", () -> fit(ref, frequency, points, request));
+        return json(timed(family(request.model()), "none", () -> fit(ref, frequency, points, request)));
     }
 
     private static FitResponse fit(FitResponse.SeriesRef ref, Frequency frequency, List<Point> points,
