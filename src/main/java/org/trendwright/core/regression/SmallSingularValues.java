@@ -60,9 +60,13 @@ final class SmallSingularValues {
                 columns[j][i] = a[i][j];
             }
         }
+        double[] squares = new double[k];
         boolean rotated = true;
         for (int sweep = 0; rotated && sweep < MAX_SWEEPS; sweep++) {
-            rotated = rotateEveryPair(columns);
+            for (int j = 0; j < k; j++) {
+                squares[j] = dot(columns[j], columns[j]);
+            }
+            rotated = rotateEveryPair(columns, squares);
         }
         double[] sigma = new double[k];
         for (int j = 0; j < k; j++) {
@@ -71,23 +75,34 @@ final class SmallSingularValues {
         return sigma;
     }
 
-    /** One cyclic sweep over the column pairs; false when every pair was already orthogonal. */
-    private static boolean rotateEveryPair(double[][] columns) {
+    /**
+     * One cyclic sweep over the column pairs; false when every pair was already orthogonal.
+     * {@code squares} holds the columns' squared lengths, kept current through the sweep.
+     */
+    private static boolean rotateEveryPair(double[][] columns, double[] squares) {
         boolean rotated = false;
         for (int p = 0; p < columns.length - 1; p++) {
             for (int q = p + 1; q < columns.length; q++) {
-                rotated |= orthogonalise(columns[p], columns[q]);
+                rotated |= orthogonalise(columns, squares, p, q);
             }
         }
         return rotated;
     }
 
-    /** Rotates columns x and y to be orthogonal (see the class comment); false when they already are. */
-    private static boolean orthogonalise(double[] x, double[] y) {
-        double a = dot(x, x);
-        double b = dot(y, y);
+    /**
+     * Rotates columns p and q to be orthogonal (see the class comment); false when they already
+     * are. The rotation changes their squared lengths a and b to a - t c and b + t c exactly in
+     * exact arithmetic, which saves two dot products per pair; the lengths are summed afresh at the
+     * start of every sweep, so rounding cannot pile up across sweeps.
+     */
+    private static boolean orthogonalise(double[][] columns, double[] squares, int p, int q) {
+        double[] x = columns[p];
+        double[] y = columns[q];
+        double a = squares[p];
+        double b = squares[q];
         double c = dot(x, y);
-        if (Math.abs(c) <= x.length * UNIT_ROUNDOFF * Math.sqrt(a * b)) {
+        double tolerance = x.length * UNIT_ROUNDOFF;
+        if (c * c <= tolerance * tolerance * a * b) {
             return false;
         }
         double zeta = (b - a) / (2 * c);
@@ -102,6 +117,8 @@ final class SmallSingularValues {
             x[i] = cos * xi - sin * y[i];
             y[i] = sin * xi + cos * y[i];
         }
+        squares[p] = a - t * c;
+        squares[q] = b + t * c;
         return true;
     }
 
