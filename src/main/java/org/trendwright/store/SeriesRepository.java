@@ -129,14 +129,22 @@ public final class SeriesRepository {
         });
     }
 
-    /** One version of a series. */
+    /**
+     * One version of a series, in one query (batch jobs read one per item); only when it is
+     * missing does a second query tell a missing series from a missing version.
+     */
     public SeriesVersion version(long id, int version) {
         return jdbc.read("read series " + id + " version " + version, c -> {
-            SeriesSummary summary = summary(c, id);
-            if (version < 1 || version > summary.version()) {
-                throw new SeriesNotFoundException(id, version);
+            try (PreparedStatement s = c.prepareStatement(SeriesRows.SELECT_SERIES_VERSION)) {
+                s.setInt(1, version);
+                s.setLong(2, id);
+                Optional<SeriesVersion> found = SeriesRows.seriesVersion(s.executeQuery(), id, version);
+                if (found.isPresent()) {
+                    return found.get();
+                }
             }
-            return readVersion(c, summary, version);
+            summary(c, id);
+            throw new SeriesNotFoundException(id, version);
         });
     }
 

@@ -5,6 +5,7 @@ import java.sql.SQLException;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.trendwright.series.Frequency;
 import org.trendwright.series.Period;
 import org.trendwright.series.Point;
@@ -24,6 +25,9 @@ final class SeriesRows {
 
     static final String SELECT_VERSION = "SELECT created_at, points FROM series_version"
             + " WHERE series_id = ? AND version = ?";
+
+    static final String SELECT_SERIES_VERSION = "SELECT s.name, s.frequency, v.created_at, v.points FROM series s"
+            + " JOIN series_version v ON v.series_id = s.id AND v.version = ? WHERE s.id = ?";
 
     private SeriesRows() {
     }
@@ -69,6 +73,18 @@ final class SeriesRows {
             }
             return new SeriesVersion(summary.id(), summary.name(), version, summary.frequency(), instant(createdAt),
                     points);
+        }
+    }
+
+    /** The row of {@link #SELECT_SERIES_VERSION}, if there is one. */
+    static Optional<SeriesVersion> seriesVersion(ResultSet rs, long id, int version) throws SQLException {
+        try (rs) {
+            if (!rs.next()) {
+                return Optional.empty();
+            }
+            Frequency frequency = frequency(rs.getString("frequency"));
+            return Optional.of(new SeriesVersion(id, rs.getString("name"), version, frequency,
+                    instant(rs.getLong("created_at")), PackedPoints.unpack(rs.getBytes("points"), frequency)));
         }
     }
 
