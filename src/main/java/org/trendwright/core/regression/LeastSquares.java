@@ -165,28 +165,29 @@ public final class LeastSquares {
      * {@code widths[p]} columns of {@code largest}. One Householder QR of the design in its own
      * column order (no pivoting), X = Q R, serves them all: with c = Q'y, the regression on the
      * first m columns leaves RSS_m = sum_{j >= m} c_j^2 (Golub &amp; Van Loan 1996, Matrix
-     * Computations, 3rd ed., section 5.3.5). A column that adds nothing to the ones before it
-     * (R_jj = 0, see {@link PivotedQr#inColumnOrder}) leaves its c_j^2 in the residual, so RSS stays
-     * unchanged; no rank check is made, and the columns are used as given (no scaling).
+     * Computations, 3rd ed., section 5.3.5). A column that adds nothing to the ones before it (a
+     * remainder of rounding noise) is left out of the factorisation ({@link PivotedQr#ofAddedColumns}),
+     * so with r of the first m columns kept, RSS_m = sum_{j >= r} c_j^2: such a column leaves RSS
+     * unchanged wherever it stands. No rank check is made, and the columns are used as given (no
+     * scaling).
      *
      * @throws InvalidSpecificationException when y has the wrong length or a non-finite value, or a
      *                                       width is negative or above the design's
      */
     public static double[] nestedResidualSumsOfSquares(Design largest, double[] y, int[] widths) {
         checkInput(largest, y);
-        PivotedQr qr = PivotedQr.inColumnOrder(largest.sharedColumns());
+        int k = largest.width();
+        boolean[] added = new boolean[k];
+        PivotedQr qr = PivotedQr.ofAddedColumns(largest.sharedColumns(), added);
         double[] c = y.clone();
         qr.applyQTranspose(c);
         double[] tail = new double[c.length + 1];
         for (int j = c.length - 1; j >= 0; j--) {
             tail[j] = tail[j + 1] + c[j] * c[j];
         }
-        // A column that added nothing (R_jj = 0) leaves its c_j in the residual.
-        int k = largest.width();
-        double[] unexplained = new double[k + 1];
+        int[] rankOfLeading = new int[k + 1];
         for (int j = 0; j < k; j++) {
-            boolean addedNothing = j < c.length && qr.r(j, j) == 0;
-            unexplained[j + 1] = unexplained[j] + (addedNothing ? c[j] * c[j] : 0);
+            rankOfLeading[j + 1] = rankOfLeading[j] + (added[j] ? 1 : 0);
         }
         double[] rss = new double[widths.length];
         for (int p = 0; p < widths.length; p++) {
@@ -194,7 +195,7 @@ public final class LeastSquares {
                 throw new InvalidSpecificationException("Nested regression " + p + " asks for " + widths[p]
                         + " columns of a design with " + k + ".");
             }
-            rss[p] = tail[Math.min(widths[p], c.length)] + unexplained[widths[p]];
+            rss[p] = tail[rankOfLeading[widths[p]]];
         }
         return rss;
     }

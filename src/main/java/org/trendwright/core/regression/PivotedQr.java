@@ -1,5 +1,7 @@
 package org.trendwright.core.regression;
 
+import java.util.Arrays;
+
 /**
  * Householder QR factorisation with column pivoting, X P = Q R, that keeps its reflectors so that
  * Q and Q' can be applied to a vector in O(nk) operations (Golub 1965, "Numerical methods for
@@ -46,21 +48,6 @@ final class PivotedQr {
      * plain sums of squares can neither overflow nor underflow.
      */
     static PivotedQr factor(double[][] columns) {
-        return factor(columns, true);
-    }
-
-    /**
-     * Factorises without pivoting, X = Q R with the columns in their own order, so that the first m
-     * columns of Q span the first m columns of X for every m (as nested regressions need). Columns
-     * may be zero or depend on the ones before them, and there may be more columns than rows: a
-     * reflection with nothing (or only rounding noise, see {@link #negligibleAsZero}) left to
-     * reflect is the identity.
-     */
-    static PivotedQr inColumnOrder(double[][] columns) {
-        return factor(columns, false);
-    }
-
-    private static PivotedQr factor(double[][] columns, boolean pivoting) {
         int k = columns.length;
         double[][] a = new double[k][];
         double[] fullNorm = new double[k];
@@ -74,12 +61,7 @@ final class PivotedQr {
         double[][] r = new double[k][k];
         double[] remaining = new double[k];
         for (int s = 0; s < k; s++) {
-            int chosen = s;
-            if (pivoting) {
-                chosen = largestRelativeRemainder(a, fullNorm, s, remaining);
-            } else {
-                remaining[s] = negligibleAsZero(norm(a[s], s), fullNorm[s]);
-            }
+            int chosen = largestRelativeRemainder(a, fullNorm, s, remaining);
             swap(a, s, chosen);
             swap(fullNorm, s, chosen);
             swap(pivot, s, chosen);
@@ -90,11 +72,52 @@ final class PivotedQr {
         }
         // Row s of R lies in row s of the later columns, read once they have stopped moving.
         for (int j = 1; j < k; j++) {
-            for (int i = 0; i < Math.min(j, a[j].length); i++) {
+            for (int i = 0; i < j; i++) {
                 r[i][j] = a[j][i];
             }
         }
         return new PivotedQr(a, tau, r, pivot);
+    }
+
+    /**
+     * Factorises, without pivoting, the columns that add something to the ones before them: taken
+     * in their own order, a column whose remainder after the reflections so far is negligible (see
+     * {@link #negligibleAsZero}), zero, or has no row left, is passed over, and {@code added[j]}
+     * says which were kept. The result is X_kept = Q R, so that the first r columns of Q span the
+     * first m columns of X whenever r of those m were kept, as nested regressions need. Columns
+     * are left unchanged; there may be more of them than rows.
+     */
+    static PivotedQr ofAddedColumns(double[][] columns, boolean[] added) {
+        int k = columns.length;
+        double[][] pending = new double[k][];
+        for (int j = 0; j < k; j++) {
+            pending[j] = columns[j].clone();
+        }
+        double[][] kept = new double[k][];
+        double[] tau = new double[k];
+        double[] diagonal = new double[k];
+        int rank = 0;
+        for (int j = 0; j < k; j++) {
+            double remaining = negligibleAsZero(norm(pending[j], rank), norm(columns[j], 0));
+            added[j] = remaining > 0;
+            if (added[j]) {
+                diagonal[rank] = reflect(pending[j], rank, remaining, tau);
+                for (int later = j + 1; later < k; later++) {
+                    applyReflector(pending[j], tau[rank], rank, pending[later]);
+                }
+                kept[rank++] = pending[j];
+            }
+        }
+        double[][] r = new double[rank][rank];
+        int[] order = new int[rank];
+        for (int s = 0; s < rank; s++) {
+            order[s] = s;
+            r[s][s] = diagonal[s];
+            for (int i = 0; i < s; i++) {
+                r[i][s] = kept[s][i];
+            }
+        }
+        return new PivotedQr(Arrays.copyOf(kept, rank), Arrays.copyOf(tau, rank), r, order);
     }
 
     int width() {
@@ -216,8 +239,8 @@ final class PivotedQr {
     /**
      * A remaining norm at most {@link LeastSquares#RANK_TOLERANCE} times the column's full norm is
      * rounding noise: the column is a linear combination of the ones before it. Reflecting that
-     * noise would remove an arbitrary direction, so it counts as 0 (no reflection). The pivoted
-     * factorisation needs no such rule: {@link ScaledDesign#checkRank} refuses those designs.
+     * noise would remove an arbitrary direction, so it counts as 0. The pivoted factorisation needs
+     * no such rule: {@link ScaledDesign#checkRank} refuses those designs.
      */
     private static double negligibleAsZero(double remaining, double fullNorm) {
         return remaining <= LeastSquares.RANK_TOLERANCE * fullNorm ? 0 : remaining;

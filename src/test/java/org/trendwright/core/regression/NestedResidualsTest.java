@@ -53,6 +53,20 @@ class NestedResidualsTest {
     }
 
     @Test
+    void a_redundant_column_between_independent_ones_changes_nothing_either() {
+        // Common practice: the span of [x, 2x, z] is that of [x, z], so their least-squares fits agree.
+        double[] x = {1, 2, 3, 4, 5, 6};
+        double[] doubled = {2, 4, 6, 8, 10, 12};
+        double[] z = {1, -1, 2, 0, 3, -2};
+        double[] y = {2.1, 3.9, 6.2, 7.8, 10.1, 11.7};
+        Design design = new Design(List.of(x, doubled, z), List.of("x", "2x", "z"), false);
+        double[] rss = LeastSquares.nestedResidualSumsOfSquares(design, y, new int[] {1, 2, 3});
+        Design withoutRedundant = new Design(List.of(x, z), List.of("x", "z"), false);
+        assertEquals(rss[0], rss[1], 1e-13);
+        assertEquals(LeastSquares.fit(withoutRedundant, y).residualSumOfSquares(), rss[2], 1e-13);
+    }
+
+    @Test
     void refuses_a_width_beyond_the_design() {
         Design design = new Design(List.of(new double[] {1, 2, 3}), List.of("x"), false);
         assertThrows(InvalidSpecificationException.class,
