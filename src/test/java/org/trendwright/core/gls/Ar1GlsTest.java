@@ -169,13 +169,8 @@ class Ar1GlsTest {
         double[] y = Ar1Series.trendPlus(Ar1Series.errors(new SplittableRandom(8), n, RHO, 1));
         Ar1GlsFit fit = Ar1Gls.cochraneOrcutt(Ar1Series.trendDesign(n), y);
         double[] u = fit.structuralResiduals();
-        double cross = 0;
-        double lagged = 0;
-        for (int t = 1; t < n; t++) {
-            cross += u[t] * u[t - 1];
-            lagged += u[t - 1] * u[t - 1];
-        }
-        double rho = cross / lagged;
+        double lagged = laggedSquares(u);
+        double rho = throughOriginRho(u);
         double squares = 0;
         for (int t = 1; t < n; t++) {
             squares += Math.pow(u[t] - rho * u[t - 1], 2);
@@ -196,9 +191,10 @@ class Ar1GlsTest {
         // formula returns x* = c / (1 - a) from any three iterates (Aitken 1926; the textbook property
         // that motivates it). Here a = 0.9, c = 0.05: x0 = 0, x1 = 0.05, x2 = 0.095, x* = 0.5.
         assertEquals(0.5, Ar1Gls.aitken(0, 0.05, 0.095), 1e-15);
-        // No x0 yet, a zero second difference, or a point outside (-1, 1): no extrapolation.
+        // No x0 yet, a zero second difference (0.5 - 2 x 0.25 + 0 is exactly 0), or a point outside
+        // (-1, 1): no extrapolation.
         assertTrue(Double.isNaN(Ar1Gls.aitken(Double.NaN, 0.05, 0.095)));
-        assertTrue(Double.isNaN(Ar1Gls.aitken(0.1, 0.2, 0.3)));
+        assertTrue(Double.isNaN(Ar1Gls.aitken(0, 0.25, 0.5)));
         assertTrue(Double.isNaN(Ar1Gls.aitken(0, 0.5, 0.75)));
     }
 
@@ -210,15 +206,25 @@ class Ar1GlsTest {
         int n = 80;
         double[] y = Ar1Series.trendPlus(Ar1Series.errors(new SplittableRandom(21), n, 0.95, 1));
         Ar1GlsFit fit = Ar1Gls.fit(Ar1Series.trendDesign(n), y, Ar1Method.PRAIS_WINSTEN, 1e-12, 100);
-        double[] u = fit.structuralResiduals();
+        assertTrue(fit.converged());
+        assertEquals(throughOriginRho(fit.structuralResiduals()), fit.rho().value(), 1e-12);
+    }
+
+    /** sum u_t u_{t-1} / sum u_{t-1}^2, t = 2..n: the regression of each residual on its predecessor. */
+    private static double throughOriginRho(double[] u) {
         double cross = 0;
-        double lagged = 0;
-        for (int t = 1; t < n; t++) {
+        for (int t = 1; t < u.length; t++) {
             cross += u[t] * u[t - 1];
+        }
+        return cross / laggedSquares(u);
+    }
+
+    private static double laggedSquares(double[] u) {
+        double lagged = 0;
+        for (int t = 1; t < u.length; t++) {
             lagged += u[t - 1] * u[t - 1];
         }
-        assertTrue(fit.converged());
-        assertEquals(cross / lagged, fit.rho().value(), 1e-12);
+        return lagged;
     }
 
     @Test
