@@ -69,7 +69,8 @@ public class AnalysisBenchmark {
         }
     }
 
-    private static Observations quarterly(int n, long seed) {
+    /** n quarters of a linear trend, a seasonal pattern and AR(1) noise (phi 0.5), seeded. */
+    static Observations quarterly(int n, long seed) {
         Random random = new Random(seed);
         double[] seasons = {0, 12, -6, 20};
         double[] y = new double[n];

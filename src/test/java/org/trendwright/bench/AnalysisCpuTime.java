@@ -3,7 +3,6 @@ package org.trendwright.bench;
 import java.lang.management.ManagementFactory;
 import java.lang.management.ThreadMXBean;
 import java.util.List;
-import java.util.Random;
 import org.trendwright.core.Observations;
 import org.trendwright.core.analysis.TrendAnalyses;
 import org.trendwright.core.analysis.TrendAnalysisSpec;
@@ -26,10 +25,10 @@ public final class AnalysisCpuTime {
     public static void main(String[] args) {
         int warmUp = args.length > 0 ? Integer.parseInt(args[0]) : 20_000;
         int batch = args.length > 1 ? Integer.parseInt(args[1]) : 500;
-        Observations twoHundred = quarterly(200);
+        Observations twoHundred = AnalysisBenchmark.quarterly(200, 17);
         Observations[] lengths = new Observations[AnalysisBenchmark.NEW_DESIGN_LENGTHS];
         for (int i = 0; i < lengths.length; i++) {
-            lengths[i] = quarterly(200 + i);
+            lengths[i] = AnalysisBenchmark.quarterly(200 + i, 17);
         }
         int[] next = {0};
         Runnable remembered = () -> everyModel(twoHundred);
@@ -62,18 +61,5 @@ public final class AnalysisCpuTime {
         }
         System.out.printf("%s: %.0f us CPU per call (best of 7 batches of %d after %d warm-up calls)%n", name, best,
                 batch, warmUp);
-    }
-
-    /** The series of {@link AnalysisBenchmark}: trend, seasonal pattern, AR(1) noise, seed 17. */
-    private static Observations quarterly(int n) {
-        Random random = new Random(17);
-        double[] seasons = {0, 12, -6, 20};
-        double[] y = new double[n];
-        double u = 0;
-        for (int t = 1; t <= n; t++) {
-            u = 0.5 * u + random.nextGaussian();
-            y[t - 1] = 400 + 3 * t + seasons[(t - 1) % 4] + 8 * u;
-        }
-        return Observations.consecutive(y, 4, 1);
     }
 }
