@@ -36,7 +36,7 @@ public final class OrderSelection {
         double[] rss = LeastSquares.nestedResidualSumsOfSquares(largest, y, widths);
         List<CandidateOrder> candidates = new ArrayList<>(widths.length);
         for (int p = 0; p < widths.length; p++) {
-            candidates.add(candidate(p, largest.rows(), widths[p], rss[p]));
+            candidates.add(CandidateOrder.fromResidualSumOfSquares(p, largest.rows(), widths[p], rss[p]));
         }
         return candidates;
     }
@@ -50,12 +50,5 @@ public final class OrderSelection {
             }
         }
         return best.order();
-    }
-
-    private static CandidateOrder candidate(int order, int n, int coefficients, double rss) {
-        double logLikelihood = -0.5 * n * (Math.log(2 * Math.PI) + Math.log(rss / n) + 1);
-        double aic = -2 * logLikelihood + 2.0 * (coefficients + 1);
-        double bic = -2 * logLikelihood + Math.log(n) * (coefficients + 1);
-        return new CandidateOrder(order, n, aic, bic);
     }
 }

@@ -79,11 +79,45 @@ public final class LeastSquares {
     public static OlsFit fit(Design design, double[] y) {
         Solved solved = solve(design, y, false);
         ScaledDesign scaled = solved.scaled();
-        double[][] xtxInverse = scaled.unscaledInverse(diagonalRatio(solved.unitR()) <= WELL_CONDITIONED
-                ? solved.qr().inverseGram() : GramInverse.refined(scaled.columns(), solved.qr()));
         return summarize(design, y, fitted(scaled.columns(), solved.scaledB()), scaled.fitMagnitude(solved.scaledB()),
-                solved, scaled.unscaled(solved.scaledB()), xtxInverse,
+                solved, scaled.unscaled(solved.scaledB()), xtxInverse(solved),
                 SmallSingularValues.conditionNumber(solved.unitR()));
+    }
+
+    /**
+     * The coefficient of the regressor {@code name} with its classical standard error and the fit's
+     * RSS, equal bit for bit to what {@link #fit} reports for them (the same factorisation,
+     * refinement and (X'X)^-1), without the rest of the inference: no other t statistics or
+     * p-values, F test, condition number, fitted values or summaries. For test regressions that read
+     * one t statistic, such as the augmented Dickey-Fuller regression.
+     *
+     * @throws IllegalArgumentException     when the design has no regressor of that name
+     * @throws InsufficientDataException    as {@link #fit}
+     * @throws RankDeficientDesignException as {@link #fit}
+     * @throws InvalidSpecificationException as {@link #fit}
+     */
+    public static SingleCoefficientFit singleCoefficient(Design design, double[] y, String name) {
+        int j = design.names().indexOf(name);
+        if (j < 0) {
+            throw new IllegalArgumentException("No regressor named '" + name + "'.");
+        }
+        Solved solved = solve(design, y, false);
+        double b = solved.scaled().unscaled(solved.scaledB())[j];
+        double variance = solved.residualSumOfSquares() / (design.rows() - design.width());
+        return new SingleCoefficientFit(name, b, standardError(variance, xtxInverse(solved)[j][j]), design.rows(),
+                solved.residualSumOfSquares());
+    }
+
+    /** (X'X)^-1 of the original columns, refined against X'X unless the design is well conditioned. */
+    private static double[][] xtxInverse(Solved solved) {
+        ScaledDesign scaled = solved.scaled();
+        return scaled.unscaledInverse(diagonalRatio(solved.unitR()) <= WELL_CONDITIONED
+                ? solved.qr().inverseGram() : GramInverse.refined(scaled.columns(), solved.qr()));
+    }
+
+    /** se(b_j) = sqrt(s^2 [(X'X)^-1]_jj). */
+    private static double standardError(double variance, double inverseDiagonal) {
+        return Math.sqrt(variance * inverseDiagonal);
     }
 
     /**
@@ -360,7 +394,7 @@ public final class LeastSquares {
         double critical = StudentT.quantile(df, 0.975);
         List<Coefficient> coefficients = new ArrayList<>(b.length);
         for (int j = 0; j < b.length; j++) {
-            double se = Math.sqrt(variance * xtxInverse[j][j]);
+            double se = standardError(variance, xtxInverse[j][j]);
             double tStat = b[j] / se;
             double p = Double.isNaN(tStat) ? Double.NaN : 2 * t.cumulativeProbability(-Math.abs(tStat));
             coefficients.add(new Coefficient(design.names().get(j), b[j], se, tStat, p,

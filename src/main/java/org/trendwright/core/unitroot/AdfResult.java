@@ -3,7 +3,6 @@ package org.trendwright.core.unitroot;
 import java.util.List;
 import org.trendwright.core.TestResult;
 import org.trendwright.core.autoregression.CandidateOrder;
-import org.trendwright.core.regression.OlsFit;
 
 /**
  * The outcome of an augmented Dickey-Fuller test. Immutable and thread-safe.
@@ -12,8 +11,7 @@ import org.trendwright.core.regression.OlsFit;
  * @param lags           p, the number of lagged differences used (fixed or chosen)
  * @param maximumLags    the largest p tried (equal to p for a fixed choice)
  * @param candidates     AIC and BIC of every p tried on the common sample (one entry for a fixed p)
- * @param regression     the test regression; coefficients "constant", "trend", "level lag 1",
- *                       "difference lag i" as the case has them
+ * @param observations   T, the observations in the test regression
  * @param gamma          γ̂, the coefficient of y_{t−1}; near 0 under a unit root, negative when the
  *                       series reverts
  * @param tau            the statistic γ̂ / se(γ̂)
@@ -21,16 +19,11 @@ import org.trendwright.core.regression.OlsFit;
  * @param test           the decision, its p-value and a plain reading
  */
 public record AdfResult(AdfSpec spec, int lags, int maximumLags, List<CandidateOrder> candidates,
-                        OlsFit regression, double gamma, double tau, CriticalValues criticalValues,
+                        int observations, double gamma, double tau, CriticalValues criticalValues,
                         TestResult test) {
 
     public AdfResult {
         candidates = List.copyOf(candidates);
-    }
-
-    /** T, the observations in the test regression. */
-    public int observations() {
-        return regression.observations();
     }
 
     /** The p-value P(tau_T ≤ tau) under the unit-root null. */

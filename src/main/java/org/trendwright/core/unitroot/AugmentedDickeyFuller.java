@@ -16,7 +16,7 @@ import org.trendwright.core.autoregression.LagSelection;
 import org.trendwright.core.autoregression.OrderSelection;
 import org.trendwright.core.regression.Design;
 import org.trendwright.core.regression.LeastSquares;
-import org.trendwright.core.regression.OlsFit;
+import org.trendwright.core.regression.SingleCoefficientFit;
 
 /**
  * The augmented Dickey-Fuller test of a unit root (Dickey & Fuller 1979, "Distribution of the
@@ -31,7 +31,9 @@ import org.trendwright.core.regression.OlsFit;
  * with the deterministic terms of {@link DeterministicTerms}. Under the null of a unit root γ = 0;
  * the alternative is γ < 0 (a stationary series around zero, a mean or a trend). The statistic
  * tau = γ̂ / se(γ̂) does not follow Student's t under the null; its left-tail p-value comes from
- * the simulated tables of {@link DickeyFullerDistribution} at T, the regression's observations.
+ * the simulated tables of {@link DickeyFullerDistribution} at T, the regression's observations. Only
+ * γ̂ and se(γ̂) of the test regression are computed ({@link LeastSquares#singleCoefficient}), equal bit
+ * for bit to those of the full fit.
  * The lagged differences soak up short-run correlation so that e_t is close to white noise; they
  * do not change the limiting distribution of tau (Said & Dickey 1984), though in small samples
  * the p-value is then approximate.
@@ -78,12 +80,14 @@ public final class AugmentedDickeyFuller {
                     LagDesigns.lagged(d, 0, maximumLags), widths);
             lags = OrderSelection.choose(candidates, spec.selection());
         }
-        OlsFit regression = LeastSquares.fit(design(y, d, lags, lags, spec.terms()), LagDesigns.lagged(d, 0, lags));
+        Design chosen = design(y, d, lags, lags, spec.terms());
+        SingleCoefficientFit levelLag = LeastSquares.singleCoefficient(chosen, LagDesigns.lagged(d, 0, lags),
+                LEVEL_LAG);
         if (spec.selection() == LagSelection.FIXED) {
-            candidates = List.of(new CandidateOrder(lags, regression.observations(), regression.aic(),
-                    regression.bic()));
+            candidates = List.of(CandidateOrder.fromResidualSumOfSquares(lags, levelLag.observations(),
+                    chosen.width(), levelLag.residualSumOfSquares()));
         }
-        return result(spec, lags, maximumLags, candidates, regression);
+        return result(spec, lags, maximumLags, candidates, levelLag);
     }
 
     /**
@@ -97,17 +101,17 @@ public final class AugmentedDickeyFuller {
     }
 
     private static AdfResult result(AdfSpec spec, int lags, int maximumLags, List<CandidateOrder> candidates,
-                                    OlsFit regression) {
-        double gamma = regression.coefficient(LEVEL_LAG).estimate();
-        double tau = regression.coefficient(LEVEL_LAG).tStatistic();
-        int observations = regression.observations();
+                                    SingleCoefficientFit levelLag) {
+        double gamma = levelLag.estimate();
+        double tau = levelLag.tStatistic();
+        int observations = levelLag.observations();
         double pValue = DickeyFullerDistribution.pValue(spec.terms(), observations, tau);
         CriticalValues critical = DickeyFullerDistribution.criticalValues(spec.terms(), observations);
         TestResult test = new TestResult("Augmented Dickey-Fuller (" + spec.terms().label() + ", " + lags
                 + " lagged differences)", "the series has a unit root (only its first differences are stationary)",
                 tau, "Dickey-Fuller (simulated tables)", List.of(), pValue, spec.level(),
                 TestResult.decide(pValue, spec.level()), reading(spec, tau, pValue));
-        return new AdfResult(spec, lags, maximumLags, candidates, regression, gamma, tau, critical, test);
+        return new AdfResult(spec, lags, maximumLags, candidates, observations, gamma, tau, critical, test);
     }
 
     /**
