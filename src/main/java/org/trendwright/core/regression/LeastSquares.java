@@ -86,10 +86,12 @@ public final class LeastSquares {
 
     /**
      * The coefficient of the regressor {@code name} with its classical standard error and the fit's
-     * RSS, equal bit for bit to what {@link #fit} reports for them (the same factorisation,
-     * refinement and (X'X)^-1), without the rest of the inference: no other t statistics or
-     * p-values, F test, condition number, fitted values or summaries. For test regressions that read
-     * one t statistic, such as the augmented Dickey-Fuller regression.
+     * RSS, without the rest of the inference: no other t statistics or p-values, F test, condition
+     * number, fitted values or summaries. For test regressions that read one t statistic, such as
+     * the augmented Dickey-Fuller regression. The estimate and RSS equal {@link #fit}'s bit for bit
+     * (the same factorisation and refinement). So does the standard error on a design whose diagonal
+     * ratio is at most {@value #WELL_CONDITIONED}; above it, only column j of (X'X)^-1 is refined
+     * ({@link GramInverse#refinedColumn}), which agrees with fit's refined inverse to its accuracy.
      *
      * @throws IllegalArgumentException     when the design has no regressor of that name
      * @throws InsufficientDataException    as {@link #fit}
@@ -102,10 +104,13 @@ public final class LeastSquares {
             throw new IllegalArgumentException("No regressor named '" + name + "'.");
         }
         Solved solved = solve(design, y, false);
-        double b = solved.scaled().unscaled(solved.scaledB())[j];
+        ScaledDesign scaled = solved.scaled();
+        double b = scaled.unscaled(solved.scaledB())[j];
+        double scaledDiagonal = diagonalRatio(solved.unitR()) <= WELL_CONDITIONED ? solved.qr().inverseGram()[j][j]
+                : GramInverse.refinedColumn(scaled.columns(), solved.qr(), j)[j];
         double variance = solved.residualSumOfSquares() / (design.rows() - design.width());
-        return new SingleCoefficientFit(name, b, standardError(variance, xtxInverse(solved)[j][j]), design.rows(),
-                solved.residualSumOfSquares());
+        return new SingleCoefficientFit(name, b, standardError(variance, scaled.unscaledInverseEntry(scaledDiagonal, j, j)),
+                design.rows(), solved.residualSumOfSquares());
     }
 
     /** (X'X)^-1 of the original columns, refined against X'X unless the design is well conditioned. */

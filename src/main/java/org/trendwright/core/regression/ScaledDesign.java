@@ -81,10 +81,15 @@ final class ScaledDesign {
     double[][] unscaledInverse(double[][] scaledInverse) {
         for (int i = 0; i < scales.length; i++) {
             for (int j = 0; j < scales.length; j++) {
-                scaledInverse[i][j] = scaledInverse[i][j] / scales[i] / scales[j];
+                scaledInverse[i][j] = unscaledInverseEntry(scaledInverse[i][j], i, j);
             }
         }
         return scaledInverse;
+    }
+
+    /** Entry (i, j) of (X'X)^-1 from that of the scaled columns (exact: the scales are powers of two). */
+    double unscaledInverseEntry(double scaledEntry, int i, int j) {
+        return scaledEntry / scales[i] / scales[j];
     }
 
     /** sum_j ||x_j|| |b_j|, which the scaled lengths and coefficients give exactly as well. */
