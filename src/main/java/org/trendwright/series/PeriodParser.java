@@ -4,8 +4,6 @@ import java.time.DateTimeException;
 import java.time.LocalDate;
 import java.time.temporal.IsoFields;
 import java.util.Optional;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * Reads one period cell. The accepted forms, case-insensitive and trimmed:
@@ -21,14 +19,6 @@ import java.util.regex.Pattern;
  * Stateless and thread-safe.
  */
 public final class PeriodParser {
-
-    private static final Pattern YEAR = Pattern.compile("(\\d{4})");
-    private static final Pattern YEAR_QUARTER = Pattern.compile("(\\d{4})-?Q([1-4])", Pattern.CASE_INSENSITIVE);
-    private static final Pattern QUARTER_YEAR = Pattern.compile("Q([1-4])[ -]?(\\d{4})", Pattern.CASE_INSENSITIVE);
-    private static final Pattern YEAR_MONTH = Pattern.compile("(\\d{4})-(\\d{2})");
-    private static final Pattern MONTH_YEAR = Pattern.compile("(\\d{1,2})/(\\d{4})");
-    private static final Pattern ISO_WEEK = Pattern.compile("(\\d{4})-W(\\d{2})", Pattern.CASE_INSENSITIVE);
-    private static final Pattern DATE = Pattern.compile("(\\d{4})-(\\d{2})-(\\d{2})");
 
     /**
      * A parsed cell: either a period of a fixed frequency or a calendar date whose frequency is
@@ -55,48 +45,101 @@ public final class PeriodParser {
         }
     }
 
+    /**
+     * Recognises the forms of the class comment by their shape, character by character (digits are
+     * ASCII 0-9; Q and W in either case): every form has a fixed length or two, so the length
+     * decides which shapes to try. A period cell is read for every row of every upload, which is
+     * why this is not a chain of regular expressions.
+     */
     private static Parsed parseOrNull(String s) {
-        Matcher m;
-        if ((m = YEAR.matcher(s)).matches()) {
-            return exact(Period.year(year(m.group(1))));
+        return switch (s.length()) {
+            case 4 -> digits(s, 0, 4) ? exact(Period.year(year(s, 0))) : null;
+            case 6 -> sixCharacters(s);
+            case 7 -> sevenCharacters(s);
+            case 8 -> digits(s, 0, 4) && s.charAt(4) == '-' && isLetter(s.charAt(5), 'W') && digits(s, 6, 8)
+                    ? exact(Period.weekOf(isoWeekMonday(year(s, 0), number(s, 6, 8)))) : null;
+            case 10 -> digits(s, 0, 4) && s.charAt(4) == '-' && digits(s, 5, 7) && s.charAt(7) == '-' && digits(s, 8, 10)
+                    ? new Parsed(null, LocalDate.of(year(s, 0), number(s, 5, 7), number(s, 8, 10))) : null;
+            default -> null;
+        };
+    }
+
+    /** 2024Q1, Q12024 or 3/2024. */
+    private static Parsed sixCharacters(String s) {
+        if (digits(s, 0, 4) && isLetter(s.charAt(4), 'Q') && isQuarter(s.charAt(5))) {
+            return exact(Period.quarter(year(s, 0), s.charAt(5) - '0'));
         }
-        if ((m = YEAR_QUARTER.matcher(s)).matches()) {
-            return exact(Period.quarter(year(m.group(1)), Integer.parseInt(m.group(2))));
+        if (isLetter(s.charAt(0), 'Q') && isQuarter(s.charAt(1)) && digits(s, 2, 6)) {
+            return exact(Period.quarter(year(s, 2), s.charAt(1) - '0'));
         }
-        if ((m = QUARTER_YEAR.matcher(s)).matches()) {
-            return exact(Period.quarter(year(m.group(2)), Integer.parseInt(m.group(1))));
-        }
-        if ((m = YEAR_MONTH.matcher(s)).matches()) {
-            return exact(Period.month(year(m.group(1)), month(m.group(2))));
-        }
-        if ((m = MONTH_YEAR.matcher(s)).matches()) {
-            return exact(Period.month(year(m.group(2)), month(m.group(1))));
-        }
-        if ((m = ISO_WEEK.matcher(s)).matches()) {
-            return exact(Period.weekOf(isoWeekMonday(year(m.group(1)), Integer.parseInt(m.group(2)))));
-        }
-        if ((m = DATE.matcher(s)).matches()) {
-            LocalDate date = LocalDate.of(year(m.group(1)), Integer.parseInt(m.group(2)), Integer.parseInt(m.group(3)));
-            return new Parsed(null, date);
+        if (digits(s, 0, 1) && s.charAt(1) == '/' && digits(s, 2, 6)) {
+            return exact(Period.month(year(s, 2), month(s, 0, 1)));
         }
         return null;
+    }
+
+    /** 2024-Q1, Q1 2024, Q1-2024, 2024-03 or 03/2024. */
+    private static Parsed sevenCharacters(String s) {
+        if (digits(s, 0, 4) && s.charAt(4) == '-') {
+            if (isLetter(s.charAt(5), 'Q') && isQuarter(s.charAt(6))) {
+                return exact(Period.quarter(year(s, 0), s.charAt(6) - '0'));
+            }
+            return digits(s, 5, 7) ? exact(Period.month(year(s, 0), month(s, 5, 7))) : null;
+        }
+        if (isLetter(s.charAt(0), 'Q') && isQuarter(s.charAt(1)) && (s.charAt(2) == ' ' || s.charAt(2) == '-')
+                && digits(s, 3, 7)) {
+            return exact(Period.quarter(year(s, 3), s.charAt(1) - '0'));
+        }
+        if (digits(s, 0, 2) && s.charAt(2) == '/' && digits(s, 3, 7)) {
+            return exact(Period.month(year(s, 3), month(s, 0, 2)));
+        }
+        return null;
+    }
+
+    /** Whether s[from, to) are all ASCII digits. */
+    private static boolean digits(String s, int from, int to) {
+        for (int i = from; i < to; i++) {
+            char c = s.charAt(i);
+            if (c < '0' || c > '9') {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** The number written by the ASCII digits s[from, to). */
+    private static int number(String s, int from, int to) {
+        int value = 0;
+        for (int i = from; i < to; i++) {
+            value = 10 * value + (s.charAt(i) - '0');
+        }
+        return value;
+    }
+
+    /** An upper-case ASCII letter in either case. */
+    private static boolean isLetter(char c, char upper) {
+        return c == upper || c == Character.toLowerCase(upper);
+    }
+
+    private static boolean isQuarter(char c) {
+        return c >= '1' && c <= '4';
     }
 
     private static Parsed exact(Period period) {
         return new Parsed(period, null);
     }
 
-    /** Years 1000..9999: four digits, so a plain count such as 12 never reads as a year. */
-    private static int year(String digits) {
-        int year = Integer.parseInt(digits);
+    /** Years 1000..9999 from the four digits at {@code from}, so a plain count such as 12 never reads as a year. */
+    private static int year(String s, int from) {
+        int year = number(s, from, from + 4);
         if (year < 1000) {
             throw new DateTimeException("year " + year);
         }
         return year;
     }
 
-    private static int month(String digits) {
-        int month = Integer.parseInt(digits);
+    private static int month(String s, int from, int to) {
+        int month = number(s, from, to);
         if (month < 1 || month > 12) {
             throw new DateTimeException("month " + month);
         }

@@ -5,9 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.integers;
 
+import java.time.DateTimeException;
+import java.time.DayOfWeek;
 import java.time.LocalDate;
 import java.time.temporal.IsoFields;
 import java.util.List;
+import java.util.Optional;
+import java.util.SplittableRandom;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 
 /** Period forms, canonical labels and seasons. Calendar facts are from the ISO 8601 calendar. */
@@ -85,5 +91,109 @@ class PeriodParserTest {
             assertEquals(Math.min(52, monday.get(IsoFields.WEEK_OF_WEEK_BASED_YEAR)), week.season());
             assertEquals(week, Period.weekOf(monday.plusDays(6)));
         });
+    }
+
+    @Test
+    void reads_exactly_the_forms_of_its_grammar_written_as_regular_expressions() {
+        // common practice: the class comment's grammar as regular expressions (ASCII digits, Q and W
+        // in either case), with years from 1000 and the ISO 8601 calendar (java.time) deciding months,
+        // weeks and dates. Seeded shapes of every form, half of them with one character changed,
+        // added or removed, so that near misses are read too.
+        String[] shapes = {"dddd", "dddd-Qd", "ddddQd", "Qd dddd", "Qd-dddd", "Qddddd", "dddd-dd", "dd/dddd",
+            "d/dddd", "dddd-Wdd", "dddd-dd-dd"};
+        String noise = "0123456789QqWw-/ x\u0663\uff11";
+        SplittableRandom random = new SplittableRandom(2026_12_02L);
+        for (int example = 0; example < 200_000; example++) {
+            StringBuilder text = new StringBuilder();
+            for (char c : shapes[random.nextInt(shapes.length)].toCharArray()) {
+                text.append(switch (c) {
+                    case 'd' -> (char) ('0' + random.nextInt(10));
+                    case 'Q', 'W' -> random.nextBoolean() ? c : Character.toLowerCase(c);
+                    default -> c;
+                });
+            }
+            if (random.nextBoolean() && text.length() > 0) {
+                int at = random.nextInt(text.length());
+                switch (random.nextInt(3)) {
+                    case 0 -> text.setCharAt(at, noise.charAt(random.nextInt(noise.length())));
+                    case 1 -> text.insert(at, noise.charAt(random.nextInt(noise.length())));
+                    default -> text.deleteCharAt(at);
+                }
+            }
+            String cell = text.toString();
+            assertEquals(RegularGrammar.parse(cell), PeriodParser.parse(cell), cell);
+        }
+    }
+
+    /** The accepted forms as regular expressions, the way the class comment lists them. */
+    private static final class RegularGrammar {
+        private static final Pattern YEAR = Pattern.compile("(\\d{4})");
+        private static final Pattern YEAR_QUARTER = Pattern.compile("(\\d{4})-?Q([1-4])", Pattern.CASE_INSENSITIVE);
+        private static final Pattern QUARTER_YEAR = Pattern.compile("Q([1-4])[ -]?(\\d{4})", Pattern.CASE_INSENSITIVE);
+        private static final Pattern YEAR_MONTH = Pattern.compile("(\\d{4})-(\\d{2})");
+        private static final Pattern MONTH_YEAR = Pattern.compile("(\\d{1,2})/(\\d{4})");
+        private static final Pattern ISO_WEEK = Pattern.compile("(\\d{4})-W(\\d{2})", Pattern.CASE_INSENSITIVE);
+        private static final Pattern DATE = Pattern.compile("(\\d{4})-(\\d{2})-(\\d{2})");
+
+        static Optional<PeriodParser.Parsed> parse(String text) {
+            String s = text.trim();
+            try {
+                return Optional.ofNullable(parsed(s));
+            } catch (DateTimeException e) {
+                return Optional.empty();
+            }
+        }
+
+        private static PeriodParser.Parsed parsed(String s) {
+            Matcher m;
+            if ((m = YEAR.matcher(s)).matches()) {
+                return period(Period.year(year(m.group(1))));
+            }
+            if ((m = YEAR_QUARTER.matcher(s)).matches()) {
+                return period(Period.quarter(year(m.group(1)), Integer.parseInt(m.group(2))));
+            }
+            if ((m = QUARTER_YEAR.matcher(s)).matches()) {
+                return period(Period.quarter(year(m.group(2)), Integer.parseInt(m.group(1))));
+            }
+            if ((m = YEAR_MONTH.matcher(s)).matches()) {
+                return period(Period.month(year(m.group(1)), month(m.group(2))));
+            }
+            if ((m = MONTH_YEAR.matcher(s)).matches()) {
+                return period(Period.month(year(m.group(2)), month(m.group(1))));
+            }
+            if ((m = ISO_WEEK.matcher(s)).matches()) {
+                int week = Integer.parseInt(m.group(2));
+                LocalDate mid = LocalDate.of(year(m.group(1)), 6, 1);
+                if (week < 1 || week > mid.range(IsoFields.WEEK_OF_WEEK_BASED_YEAR).getMaximum()) {
+                    throw new DateTimeException("week " + week);
+                }
+                return period(Period.weekOf(mid.with(IsoFields.WEEK_OF_WEEK_BASED_YEAR, week).with(DayOfWeek.MONDAY)));
+            }
+            if ((m = DATE.matcher(s)).matches()) {
+                return new PeriodParser.Parsed(null, LocalDate.of(year(m.group(1)), Integer.parseInt(m.group(2)),
+                        Integer.parseInt(m.group(3))));
+            }
+            return null;
+        }
+
+        private static PeriodParser.Parsed period(Period period) {
+            return new PeriodParser.Parsed(period, null);
+        }
+
+        private static int year(String digits) {
+            int year = Integer.parseInt(digits);
+            if (year < 1000) {
+                throw new DateTimeException("year " + year);
+            }
+            return year;
+        }
+
+        private static int month(String digits) {
+            int month = Integer.parseInt(digits);
+            if (month < 1 || month > 12) {
+                throw new DateTimeException("month " + month);
+            }
+            return month;
+        }
     }
 }
