@@ -58,8 +58,9 @@ public final class PeriodParser {
             case 7 -> sevenCharacters(s);
             case 8 -> digits(s, 0, 4) && s.charAt(4) == '-' && isLetter(s.charAt(5), 'W') && digits(s, 6, 8)
                     ? exact(Period.weekOf(isoWeekMonday(year(s, 0), number(s, 6, 8)))) : null;
-            case 10 -> digits(s, 0, 4) && s.charAt(4) == '-' && digits(s, 5, 7) && s.charAt(7) == '-' && digits(s, 8, 10)
-                    ? new Parsed(null, LocalDate.of(year(s, 0), number(s, 5, 7), number(s, 8, 10))) : null;
+            case 10 -> digits(s, 0, 4) && s.charAt(4) == '-' && digits(s, 5, 7) && s.charAt(7) == '-'
+                    && digits(s, 8, 10) ? new Parsed(null, LocalDate.of(year(s, 0), number(s, 5, 7), number(s, 8, 10)))
+                    : null;
             default -> null;
         };
     }

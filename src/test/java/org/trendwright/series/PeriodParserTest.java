@@ -128,8 +128,10 @@ class PeriodParserTest {
     /** The accepted forms as regular expressions, the way the class comment lists them. */
     private static final class RegularGrammar {
         private static final Pattern YEAR = Pattern.compile("(\\d{4})");
-        private static final Pattern YEAR_QUARTER = Pattern.compile("(\\d{4})-?Q([1-4])", Pattern.CASE_INSENSITIVE);
-        private static final Pattern QUARTER_YEAR = Pattern.compile("Q([1-4])[ -]?(\\d{4})", Pattern.CASE_INSENSITIVE);
+        private static final Pattern YEAR_QUARTER = Pattern.compile("(\\d{4})-?Q([1-4])",
+                Pattern.CASE_INSENSITIVE);
+        private static final Pattern QUARTER_YEAR = Pattern.compile("Q([1-4])[ -]?(\\d{4})",
+                Pattern.CASE_INSENSITIVE);
         private static final Pattern YEAR_MONTH = Pattern.compile("(\\d{4})-(\\d{2})");
         private static final Pattern MONTH_YEAR = Pattern.compile("(\\d{1,2})/(\\d{4})");
         private static final Pattern ISO_WEEK = Pattern.compile("(\\d{4})-W(\\d{2})", Pattern.CASE_INSENSITIVE);
@@ -167,7 +169,8 @@ class PeriodParserTest {
                 if (week < 1 || week > mid.range(IsoFields.WEEK_OF_WEEK_BASED_YEAR).getMaximum()) {
                     throw new DateTimeException("week " + week);
                 }
-                return period(Period.weekOf(mid.with(IsoFields.WEEK_OF_WEEK_BASED_YEAR, week).with(DayOfWeek.MONDAY)));
+                LocalDate monday = mid.with(IsoFields.WEEK_OF_WEEK_BASED_YEAR, week).with(DayOfWeek.MONDAY);
+                return period(Period.weekOf(monday));
             }
             if ((m = DATE.matcher(s)).matches()) {
                 return new PeriodParser.Parsed(null, LocalDate.of(year(m.group(1)), Integer.parseInt(m.group(2)),

@@ -109,8 +109,8 @@ public final class LeastSquares {
         double scaledDiagonal = diagonalRatio(solved.unitR()) <= WELL_CONDITIONED ? solved.qr().inverseGram()[j][j]
                 : GramInverse.refinedColumn(scaled.columns(), solved.qr(), j)[j];
         double variance = solved.residualSumOfSquares() / (design.rows() - design.width());
-        return new SingleCoefficientFit(name, b, standardError(variance, scaled.unscaledInverseEntry(scaledDiagonal, j, j)),
-                design.rows(), solved.residualSumOfSquares());
+        double standardError = standardError(variance, scaled.unscaledInverseEntry(scaledDiagonal, j, j));
+        return new SingleCoefficientFit(name, b, standardError, design.rows(), solved.residualSumOfSquares());
     }
 
     /** (X'X)^-1 of the original columns, refined against X'X unless the design is well conditioned. */

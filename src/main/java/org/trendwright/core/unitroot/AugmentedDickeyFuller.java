@@ -32,8 +32,8 @@ import org.trendwright.core.regression.SingleCoefficientFit;
  * the alternative is γ < 0 (a stationary series around zero, a mean or a trend). The statistic
  * tau = γ̂ / se(γ̂) does not follow Student's t under the null; its left-tail p-value comes from
  * the simulated tables of {@link DickeyFullerDistribution} at T, the regression's observations. Only
- * γ̂ and se(γ̂) of the test regression are computed ({@link LeastSquares#singleCoefficient}), equal bit
- * for bit to those of the full fit.
+ * γ̂ and se(γ̂) of the test regression are computed ({@link LeastSquares#singleCoefficient}): γ̂ as
+ * the full fit gives it, se(γ̂) to within the rounding of its refined (X'X)^-1.
  * The lagged differences soak up short-run correlation so that e_t is close to white noise; they
  * do not change the limiting distribution of tau (Said & Dickey 1984), though in small samples
  * the p-value is then approximate.
