@@ -191,11 +191,18 @@ public final class Ar1Gls {
     static Design transform(Design design, double rho, Ar1Method method) {
         if (method == Ar1Method.PRAIS_WINSTEN) {
             double firstWeight = Math.sqrt(1 - rho * rho);
-            return Design.generate(design.rows(), design.names(), false, (i, j) -> i == 0
-                    ? firstWeight * design.get(0, j) : design.get(i, j) - rho * design.get(i - 1, j));
+            return Design.generate(design.rows(), design.names(), false, (j, values) -> {
+                values[0] = firstWeight * design.get(0, j);
+                for (int i = 1; i < values.length; i++) {
+                    values[i] = design.get(i, j) - rho * design.get(i - 1, j);
+                }
+            });
         }
-        return Design.generate(design.rows() - 1, design.names(), false,
-                (i, j) -> design.get(i + 1, j) - rho * design.get(i, j));
+        return Design.generate(design.rows() - 1, design.names(), false, (j, values) -> {
+            for (int i = 0; i < values.length; i++) {
+                values[i] = design.get(i + 1, j) - rho * design.get(i, j);
+            }
+        });
     }
 
     /** v*_t = v_t - rho v_{t-1}, t = 2..n, preceded for Prais-Winsten by v*_1 = sqrt(1 - rho^2) v_1. */

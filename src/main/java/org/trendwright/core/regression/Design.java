@@ -52,24 +52,27 @@ public final class Design {
         this.hasIntercept = hasIntercept;
     }
 
-    /** The value of regressor {@code column} in observation {@code row} (both 0-based). */
+    /**
+     * Writes the values of regressor {@code column} (0-based), one per observation, into
+     * {@code values}. The loop over the rows is the filler's own, so each kind of design compiles
+     * to its own loop: a per-element callback shared by every kind of design would be a call the
+     * JIT cannot inline once more than two kinds run.
+     */
     @FunctionalInterface
-    public interface Cell {
-        double at(int row, int column);
+    public interface ColumnFiller {
+        void fill(int column, double[] values);
     }
 
     /**
-     * A design of {@code rows} rows whose element (i, j) is {@code cell.at(i, j)}, filled column by
-     * column into arrays the design owns.
+     * A design of {@code rows} rows whose column j is written by {@code filler.fill(j, ...)} into an
+     * array the design owns.
      *
      * @throws InvalidSpecificationException when there are no names (no columns)
      */
-    public static Design generate(int rows, List<String> names, boolean hasIntercept, Cell cell) {
+    public static Design generate(int rows, List<String> names, boolean hasIntercept, ColumnFiller filler) {
         double[][] filled = new double[names.size()][rows];
         for (int j = 0; j < filled.length; j++) {
-            for (int i = 0; i < rows; i++) {
-                filled[j][i] = cell.at(i, j);
-            }
+            filler.fill(j, filled[j]);
         }
         return new Design(filled, names, hasIntercept);
     }

@@ -55,7 +55,11 @@ record TrendDesign(TrendSpec spec, int periodsPerYear, int firstSeason) {
 
     /** The design for the observed periods. */
     Design design(int[] times) {
-        return Design.generate(times.length, names(), true, (i, j) -> regressor(times[i], j));
+        return Design.generate(times.length, names(), true, (j, values) -> {
+            for (int i = 0; i < values.length; i++) {
+                values[i] = regressor(times[i], j);
+            }
+        });
     }
 
     /**

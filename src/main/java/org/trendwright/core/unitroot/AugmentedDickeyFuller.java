@@ -117,29 +117,33 @@ public final class AugmentedDickeyFuller {
     /**
      * The regressors of Δy_t: the deterministic terms, y_{t−1} and Δy_{t−1..t−p}, over the rows whose
      * differences Δy index from {@code start} on (0-based in d), so that every p ≤ start shares them.
+     * Row i has Δy at d[start + i] = y[start + i + 1] − y[start + i], so its time index counted from 1
+     * is start + i + 2, its level lag y[start + i] and its lag-l difference d[start + i − l].
      */
     private static Design design(double[] y, double[] d, int p, int start, DeterministicTerms terms) {
-        int rows = d.length - start;
-        List<double[]> columns = new ArrayList<>(p + 3);
-        List<String> names = new ArrayList<>(p + 3);
+        int deterministic = terms.count();
+        List<String> names = new ArrayList<>(deterministic + 1 + p);
         if (terms != DeterministicTerms.NO_CONSTANT) {
-            columns.add(LagDesigns.ones(rows));
             names.add("constant");
         }
         if (terms == DeterministicTerms.CONSTANT_AND_TREND) {
-            // Row j has Δy at d[j] = y[j+1] − y[j], i.e. time index j + 2 counted from 1.
-            double[] trend = new double[rows];
-            Arrays.setAll(trend, i -> start + i + 2);
-            columns.add(trend);
             names.add("trend");
         }
-        columns.add(Arrays.copyOfRange(y, start, y.length - 1));
         names.add(LEVEL_LAG);
         for (int i = 1; i <= p; i++) {
-            columns.add(LagDesigns.lagged(d, i, start));
             names.add("difference lag " + i);
         }
-        return new Design(columns, names, terms != DeterministicTerms.NO_CONSTANT);
+        return Design.generate(d.length - start, names, terms != DeterministicTerms.NO_CONSTANT, (j, values) -> {
+            if (j == 0 && deterministic > 0) {
+                Arrays.fill(values, 1);
+            } else if (j == 1 && deterministic > 1) {
+                Arrays.setAll(values, i -> start + i + 2);
+            } else if (j == deterministic) {
+                System.arraycopy(y, start, values, 0, values.length);
+            } else {
+                System.arraycopy(d, start - (j - deterministic), values, 0, values.length);
+            }
+        });
     }
 
     private static void checkLength(int n, int maximumLags, DeterministicTerms terms) {
