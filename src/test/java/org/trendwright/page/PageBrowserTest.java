@@ -65,6 +65,14 @@ class PageBrowserTest {
     }
 
     /** Loads the page afresh (a blank page first: the same address with a new hash would not reload). */
+    /**
+     * Waits for the model comparison, which the view runs after the fit, to render its table: its
+     * rows push the publish button down, and a click that lands while they arrive can miss it.
+     */
+    private static void awaitComparison() {
+        browser.await(ExpectedConditions.visibilityOfElementLocated(By.cssSelector("#comparison-table tr.recommended")));
+    }
+
     private static void visit(String hash) {
         browser.driver.get("about:blank");
         browser.driver.get(base() + "/" + hash);
@@ -208,6 +216,7 @@ class PageBrowserTest {
         browser.await(ExpectedConditions.attributeContains(By.id("results"), "data-fitted", "trend"));
         String note = "Plan on the 80% band. <b onmouseover=window.__pwned=1>bold?</b>";
         browser.find("#brief-note").sendKeys(note);
+        awaitComparison();
         browser.find("#publish-button").click();
         browser.await(ExpectedConditions.visibilityOfElementLocated(By.id("brief-link-row")));
         String link = browser.find("#brief-link").getAttribute("value");
@@ -249,6 +258,7 @@ class PageBrowserTest {
         browser.resize(1280, 800);
         visit("#/series/" + id);
         browser.await(ExpectedConditions.attributeContains(By.id("results"), "data-fitted", "trend"));
+        awaitComparison();
         browser.find("#publish-button").click();
         browser.await(ExpectedConditions.visibilityOfElementLocated(By.id("brief-link-row")));
         String link = browser.find("#brief-link").getAttribute("value");
