@@ -1,6 +1,7 @@
 package org.trendwright.core.autoregression;
 
 import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.regression.GaussianLikelihood;
 
 /**
  * One candidate lag count examined by an information criterion, fitted on the common estimation
@@ -15,15 +16,13 @@ public record CandidateOrder(int order, int observations, double aic, double bic
 
     /**
      * The candidate of a fit with {@code coefficients} regressors and residual sum of squares
-     * {@code rss} over n observations, with the Gaussian log-likelihood at the maximum-likelihood
-     * variance, ln L = −n/2 (ln 2π + ln(RSS/n) + 1), as {@link org.trendwright.core.regression.OlsFit}
-     * computes it (Akaike 1974, IEEE Trans. Automatic Control 19; Schwarz 1978, Annals of Statistics 6).
+     * {@code rss} over n observations, its criteria counting the error variance as a parameter, as
+     * {@link org.trendwright.core.regression.OlsFit} does ({@link GaussianLikelihood}).
      */
     public static CandidateOrder fromResidualSumOfSquares(int order, int n, int coefficients, double rss) {
-        double logLikelihood = -0.5 * n * (Math.log(2 * Math.PI) + Math.log(rss / n) + 1);
-        double aic = -2 * logLikelihood + 2.0 * (coefficients + 1);
-        double bic = -2 * logLikelihood + Math.log(n) * (coefficients + 1);
-        return new CandidateOrder(order, n, aic, bic);
+        double logLikelihood = GaussianLikelihood.logLikelihood(n, rss);
+        return new CandidateOrder(order, n, GaussianLikelihood.aic(logLikelihood, coefficients + 1),
+                GaussianLikelihood.bic(logLikelihood, n, coefficients + 1));
     }
 
     /** The value of the given criterion (AIC or BIC). */

@@ -11,6 +11,7 @@ import org.trendwright.core.gls.Ar1Gls;
 import org.trendwright.core.gls.Ar1GlsEstimate;
 import org.trendwright.core.gls.Ar1GlsFit;
 import org.trendwright.core.gls.Ar1Method;
+import org.trendwright.core.regression.GaussianLikelihood;
 import org.trendwright.core.trend.BackTransformed;
 import org.trendwright.core.trend.TrendFit;
 import org.trendwright.core.trend.TrendRegression;
@@ -88,7 +89,7 @@ public record GlsTrendCandidate(TrendSpec trend, double level) implements Candid
             }
             int n = u.length;
             double rho = gls.rho().value();
-            double ll = -0.5 * n * (Math.log(2 * Math.PI) + Math.log(rss / n) + 1) + 0.5 * Math.log(1 - rho * rho);
+            double ll = GaussianLikelihood.logLikelihood(n, rss) + 0.5 * Math.log(1 - rho * rho);
             if (ols.spec().logScale()) {
                 for (double lnY : ols.ols().y()) {
                     ll -= lnY;
