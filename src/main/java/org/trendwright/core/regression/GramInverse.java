@@ -1,5 +1,7 @@
 package org.trendwright.core.regression;
 
+import java.util.function.UnaryOperator;
+
 /**
  * (X'X)^-1 from the QR factors, refined to about working precision.
  *
@@ -34,26 +36,9 @@ final class GramInverse {
 
     /** (X'X)^-1 for the columns x (original order), qr being their factorisation. */
     static double[][] refined(double[][] x, PivotedQr qr) {
-        int k = x.length;
         double[][] z = qr.inverseGram();
         double[][][] gram = gram(x);
-        double previous = Double.POSITIVE_INFINITY;
-        for (int step = 0; step < MAX_REFINEMENTS; step++) {
-            double[][] correction = solveGram(qr, residual(gram, z));
-            double size = largestMagnitude(correction);
-            if (size >= previous) {
-                break;
-            }
-            for (int i = 0; i < k; i++) {
-                for (int j = 0; j < k; j++) {
-                    z[i][j] += correction[i][j];
-                }
-            }
-            if (size <= UNIT_ROUNDOFF * largestMagnitude(z)) {
-                break;
-            }
-            previous = size;
-        }
+        refine(z, current -> solveGram(qr, residual(gram, current)));
         return symmetrised(z);
     }
 
@@ -66,48 +51,62 @@ final class GramInverse {
      * order, about cond(X)^2 u^2 relative, so the column is as accurate as that of {@link #refined}.
      */
     static double[] refinedColumn(double[][] x, PivotedQr qr, int j) {
-        double[] unit = new double[x.length];
-        unit[j] = 1;
-        double[] z = solveGramColumn(qr, unit);
+        double[][] unit = new double[x.length][1];
+        unit[j][0] = 1;
+        double[][] z = solveGram(qr, unit);
+        refine(z, current -> solveGram(qr, columnResidual(x, current, j)));
+        double[] column = new double[z.length];
+        for (int i = 0; i < column.length; i++) {
+            column[i] = z[i][0];
+        }
+        return column;
+    }
+
+    /**
+     * Corrects z in place, step by step, with the corrections {@code correctionOf} computes from the
+     * current z, under the stopping rules of the class comment.
+     */
+    private static void refine(double[][] z, UnaryOperator<double[][]> correctionOf) {
         double previous = Double.POSITIVE_INFINITY;
         for (int step = 0; step < MAX_REFINEMENTS; step++) {
-            double[] correction = solveGramColumn(qr, columnResidual(x, z, j));
+            double[][] correction = correctionOf.apply(z);
             double size = largestMagnitude(correction);
             if (size >= previous) {
-                break;
+                return;
             }
             for (int i = 0; i < z.length; i++) {
-                z[i] += correction[i];
+                for (int c = 0; c < z[i].length; c++) {
+                    z[i][c] += correction[i][c];
+                }
             }
             if (size <= UNIT_ROUNDOFF * largestMagnitude(z)) {
-                break;
+                return;
             }
             previous = size;
         }
-        return z;
     }
 
-    /** e_j - X'(X z) in double-double arithmetic, rounded. */
-    private static double[] columnResidual(double[][] x, double[] z, int j) {
+    /** e_j - X'(X z) for the k x 1 column z, in double-double arithmetic, rounded. */
+    private static double[][] columnResidual(double[][] x, double[][] z, int j) {
         int n = x[0].length;
         double[] high = new double[n];
         double[] low = new double[n];
         for (int row = 0; row < n; row++) {
             CompensatedDot sum = new CompensatedDot();
             for (int m = 0; m < z.length; m++) {
-                sum.addProduct(x[m][row], z[m]);
+                sum.addProduct(x[m][row], z[m][0]);
             }
             high[row] = sum.value();
             low[row] = sum.lowPart();
         }
-        double[] e = new double[z.length];
+        double[][] e = new double[z.length][1];
         for (int i = 0; i < z.length; i++) {
             CompensatedDot sum = new CompensatedDot().add(i == j ? 1 : 0);
             for (int row = 0; row < n; row++) {
                 sum.addProduct(-x[i][row], high[row]);
                 sum.addProduct(-x[i][row], low[row]);
             }
-            e[i] = sum.value();
+            e[i][0] = sum.value();
         }
         return e;
     }
@@ -149,34 +148,20 @@ final class GramInverse {
         return e;
     }
 
-    /** P R^-1 R^-T P' E, column by column. */
+    /** P R^-1 R^-T P' E for a k x m matrix E, column by column. */
     private static double[][] solveGram(PivotedQr qr, double[][] e) {
         int k = e.length;
-        double[][] result = new double[k][k];
-        double[] column = new double[k];
-        for (int j = 0; j < k; j++) {
-            for (int i = 0; i < k; i++) {
-                column[i] = e[i][j];
-            }
-            double[] solved = solveGramColumn(qr, column);
-            for (int i = 0; i < k; i++) {
-                result[i][j] = solved[i];
-            }
-        }
-        return result;
-    }
-
-    /** P R^-1 R^-T P' e. */
-    private static double[] solveGramColumn(PivotedQr qr, double[] e) {
-        int k = e.length;
+        int m = e[0].length;
+        double[][] result = new double[k][m];
         double[] pivoted = new double[k];
-        for (int s = 0; s < k; s++) {
-            pivoted[s] = e[qr.pivot(s)];
-        }
-        double[] solved = qr.solveR(qr.solveRTranspose(pivoted));
-        double[] result = new double[k];
-        for (int s = 0; s < k; s++) {
-            result[qr.pivot(s)] = solved[s];
+        for (int j = 0; j < m; j++) {
+            for (int s = 0; s < k; s++) {
+                pivoted[s] = e[qr.pivot(s)][j];
+            }
+            double[] solved = qr.solveR(qr.solveRTranspose(pivoted));
+            for (int s = 0; s < k; s++) {
+                result[qr.pivot(s)][j] = solved[s];
+            }
         }
         return result;
     }
@@ -184,15 +169,9 @@ final class GramInverse {
     private static double largestMagnitude(double[][] m) {
         double largest = 0;
         for (double[] row : m) {
-            largest = Math.max(largest, largestMagnitude(row));
-        }
-        return largest;
-    }
-
-    private static double largestMagnitude(double[] v) {
-        double largest = 0;
-        for (double x : v) {
-            largest = Math.max(largest, Math.abs(x));
+            for (double v : row) {
+                largest = Math.max(largest, Math.abs(v));
+            }
         }
         return largest;
     }

@@ -59,10 +59,13 @@ public final class LeastSquares {
     /** Diagonal ratio of R up to which {@link #estimates} skips the refinement (see there). */
     static final double WELL_CONDITIONED = 100;
 
-    /** |r_11 / r_kk| of an upper-triangular R from column-pivoted QR: a lower estimate of cond(R). */
-    private static double diagonalRatio(double[][] r) {
-        int last = r.length - 1;
-        return Math.abs(r[0][0] / r[last][last]);
+    /**
+     * Whether |r_11 / r_kk| of the pivoted unit-column R, a lower estimate of cond(X), is at most
+     * {@value #WELL_CONDITIONED}: where the refinements of the solution and of (X'X)^-1 may be skipped.
+     */
+    private static boolean isWellConditioned(double[][] unitR) {
+        int last = unitR.length - 1;
+        return Math.abs(unitR[0][0] / unitR[last][last]) <= WELL_CONDITIONED;
     }
 
     /**
@@ -106,7 +109,7 @@ public final class LeastSquares {
         Solved solved = solve(design, y, false);
         ScaledDesign scaled = solved.scaled();
         double b = scaled.unscaled(solved.scaledB())[j];
-        double scaledDiagonal = diagonalRatio(solved.unitR()) <= WELL_CONDITIONED ? solved.qr().inverseGram()[j][j]
+        double scaledDiagonal = isWellConditioned(solved.unitR()) ? solved.qr().inverseGram()[j][j]
                 : GramInverse.refinedColumn(scaled.columns(), solved.qr(), j)[j];
         double variance = solved.residualSumOfSquares() / (design.rows() - design.width());
         double standardError = standardError(variance, scaled.unscaledInverseEntry(scaledDiagonal, j, j));
@@ -116,7 +119,7 @@ public final class LeastSquares {
     /** (X'X)^-1 of the original columns, refined against X'X unless the design is well conditioned. */
     private static double[][] xtxInverse(Solved solved) {
         ScaledDesign scaled = solved.scaled();
-        return scaled.unscaledInverse(diagonalRatio(solved.unitR()) <= WELL_CONDITIONED
+        return scaled.unscaledInverse(isWellConditioned(solved.unitR())
                 ? solved.qr().inverseGram() : GramInverse.refined(scaled.columns(), solved.qr()));
     }
 
@@ -168,7 +171,7 @@ public final class LeastSquares {
         PivotedQr qr = PivotedQr.factor(scaled.columns());
         double[][] unitR = scaled.unitLengthR(qr);
         scaled.checkRank(unitR);
-        AugmentedRefinement.Solution solution = maySkipRefinement && diagonalRatio(unitR) <= WELL_CONDITIONED
+        AugmentedRefinement.Solution solution = maySkipRefinement && isWellConditioned(unitR)
                 ? AugmentedRefinement.plain(scaled.columns(), qr, y)
                 : AugmentedRefinement.solve(scaled.columns(), qr, y);
         double[] scaledB = solution.coefficients();
@@ -330,9 +333,9 @@ public final class LeastSquares {
         double fPValue = modelDf == 0 ? Double.NaN : upperTailF(fStatistic, modelDf, df);
         double rSquared = ess / tss;
         double adjusted = 1 - (rss / tss) * (n - (design.hasIntercept() ? 1 : 0)) / df;
-        double logLikelihood = -0.5 * n * (Math.log(2 * Math.PI) + Math.log(rss / n) + 1);
-        double aic = -2 * logLikelihood + 2.0 * (k + 1);
-        double bic = -2 * logLikelihood + Math.log(n) * (k + 1);
+        double logLikelihood = GaussianLikelihood.logLikelihood(n, rss);
+        double aic = GaussianLikelihood.aic(logLikelihood, k + 1);
+        double bic = GaussianLikelihood.bic(logLikelihood, n, k + 1);
         return new OlsFit(design, y, coefficients, fitted, residuals, rss, tss, rSquared, adjusted, fStatistic,
                 fPValue, Math.sqrt(variance), df, logLikelihood, aic, bic, xtxInverse, conditionNumber);
     }
