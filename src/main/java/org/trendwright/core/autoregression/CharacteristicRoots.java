@@ -3,6 +3,7 @@ package org.trendwright.core.autoregression;
 import java.util.Locale;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
+import org.trendwright.core.Matrices;
 
 /**
  * Stationarity of an autoregression y_t = b0 + φ1 y_{t−1} + ... + φm y_{t−m} + e_t from the roots
@@ -46,7 +47,7 @@ public final class CharacteristicRoots {
         if (m == 1) {
             return Math.abs(phi[0]);
         }
-        double[][] companion = new double[m][m];
+        double[][] companion = Matrices.zeros(m, m);
         companion[0] = phi.clone();
         for (int i = 1; i < m; i++) {
             companion[i][i - 1] = 1;

@@ -1,6 +1,7 @@
 package org.trendwright.core.breaks;
 
 import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.Matrices;
 import org.trendwright.core.RankDeficientDesignException;
 import org.trendwright.core.regression.Design;
 import org.trendwright.core.regression.LeastSquares;
@@ -205,7 +206,7 @@ final class ChowGainFactors {
         int k = design.width();
         int first = BreakCandidates.first(n);
         int last = BreakCandidates.last(n);
-        double[][] r = new double[k][k];
+        double[][] r = Matrices.zeros(k, k);
         double[][] inverses = new double[last - first + 1][];
         for (int m = 1; m <= last; m++) {
             SegmentSums.rotateIn(r, new double[k], basisRow(basis, m - 1, k), 0);
@@ -227,7 +228,7 @@ final class ChowGainFactors {
         int last = BreakCandidates.last(n);
         int packed = k * (k + 1) / 2;
         double[] weights = new double[(last - first + 1) * packed];
-        double[][] r = new double[k][k];
+        double[][] r = Matrices.zeros(k, k);
         for (int m = n - 1; m >= first; m--) {
             SegmentSums.rotateIn(r, new double[k], basisRow(basis, m, k), 0);
             if (m == last) {
@@ -248,7 +249,7 @@ final class ChowGainFactors {
 
     /** U upper triangular with U'U = A'A + B'B, by rotating the rows of A and B into it. */
     private static double[][] triangleOf(double[] a, double[] b, int k) {
-        double[][] u = new double[k][k];
+        double[][] u = Matrices.zeros(k, k);
         double[] unused = new double[k];
         for (double[] rows : new double[][] {a, b}) {
             for (int j = 0; j < k; j++) {

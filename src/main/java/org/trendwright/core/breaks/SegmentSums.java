@@ -1,5 +1,6 @@
 package org.trendwright.core.breaks;
 
+import org.trendwright.core.Matrices;
 import org.trendwright.core.regression.Design;
 
 /**
@@ -39,7 +40,7 @@ final class SegmentSums {
     private static double[] accumulate(double[][] rows, double[] y, int start, int step) {
         int n = y.length;
         int k = rows[0].length;
-        double[][] r = new double[k][k];
+        double[][] r = Matrices.zeros(k, k);
         double[] z = new double[k];
         double[] rss = new double[n + 1];
         double running = 0;

@@ -9,6 +9,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.Matrices;
 
 /**
  * The asymptotic null distribution of the sup-Wald statistic for one structural change in p
@@ -146,7 +147,7 @@ public final class SupWaldDistribution {
             int parameters = (int) rows.get(rows.size() - 1)[0];
             int perRow = rows.size() / parameters;
             double[] tails = new double[perRow];
-            double[][] quantiles = new double[parameters][perRow];
+            double[][] quantiles = Matrices.zeros(parameters, perRow);
             for (int r = 0; r < rows.size(); r++) {
                 double[] row = rows.get(r);
                 int i = perRow - 1 - r % perRow;

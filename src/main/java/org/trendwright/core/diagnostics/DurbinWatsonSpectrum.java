@@ -3,6 +3,7 @@ package org.trendwright.core.diagnostics;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.trendwright.core.Matrices;
 import org.trendwright.core.RankDeficientDesignException;
 import org.trendwright.core.regression.Design;
 
@@ -204,7 +205,7 @@ record DurbinWatsonSpectrum(double[] eigenvalues, boolean spansConstant) {
         int k = columns.length;
         int half = (n + 1) / 2;
         double[][][] folded = folded(columns, n, half);
-        double[][] out = new double[k][n];
+        double[][] out = Matrices.zeros(k, n);
         double[] sums = new double[k];
         for (int j = 0; j < n; j++) {
             double[][] parts = folded[j % 2];
@@ -243,7 +244,7 @@ record DurbinWatsonSpectrum(double[] eigenvalues, boolean spansConstant) {
      * element appears once, with cos(pi j / 2) = 0 for odd j taking care of the odd part.
      */
     private static double[][][] folded(double[][] columns, int n, int half) {
-        double[][][] parts = new double[2][columns.length][half];
+        double[][][] parts = {Matrices.zeros(columns.length, half), Matrices.zeros(columns.length, half)};
         for (int c = 0; c < columns.length; c++) {
             for (int t = 0; t < half; t++) {
                 int mirror = n - 1 - t;

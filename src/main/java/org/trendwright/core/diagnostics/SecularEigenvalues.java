@@ -1,6 +1,7 @@
 package org.trendwright.core.diagnostics;
 
 import java.util.Arrays;
+import org.trendwright.core.Matrices;
 import org.trendwright.core.RankDeficientDesignException;
 
 /**
@@ -87,7 +88,7 @@ final class SecularEigenvalues {
         double[][] keptRest = restricted(rest, index);
         double[][] rootCoordinates = hasWeight(keptRest, rest)
                 ? coordinatesOnRoots(q, roots, loewnerWeights(q, w, roots), keptRest)
-                : new double[rest.length][roots.count()];
+                : Matrices.zeros(rest.length, roots.count());
         return merge(poles, kept, roots, q, rest, rootCoordinates);
     }
 
@@ -160,7 +161,7 @@ final class SecularEigenvalues {
     }
 
     private static double[][] restricted(double[][] rest, int[] index) {
-        double[][] out = new double[rest.length][index.length];
+        double[][] out = Matrices.zeros(rest.length, index.length);
         for (int c = 0; c < rest.length; c++) {
             for (int a = 0; a < index.length; a++) {
                 out[c][a] = rest[c][index[a]];
@@ -214,7 +215,7 @@ final class SecularEigenvalues {
     /** Coordinates of each remaining direction on the unit eigenvectors v_j ~ (z_i / (q_i - mu_j))_i. */
     private static double[][] coordinatesOnRoots(double[] q, SecularRoots roots, double[] weights, double[][] rest) {
         int count = roots.count();
-        double[][] coordinates = new double[rest.length][count];
+        double[][] coordinates = Matrices.zeros(rest.length, count);
         double[] dots = new double[rest.length];
         for (int j = 0; j < count; j++) {
             double normSquared = 0;
@@ -239,7 +240,7 @@ final class SecularEigenvalues {
                                double[][] rootCoordinates) {
         int size = poles.length - 1;
         double[] merged = new double[size];
-        double[][] mergedRest = new double[rest.length][size];
+        double[][] mergedRest = Matrices.zeros(rest.length, size);
         int pole = nextDeflated(kept, 0);
         int root = 0;
         for (int out = 0; out < size; out++) {

@@ -1,6 +1,7 @@
 package org.trendwright.core.gls;
 
 import java.util.List;
+import org.trendwright.core.Matrices;
 import org.trendwright.core.regression.Coefficient;
 
 /**
@@ -39,7 +40,7 @@ public record Ar1GlsFit(Ar1Method method, RhoEstimate rho, int iterations, boole
 
     public Ar1GlsFit {
         coefficients = List.copyOf(coefficients);
-        coefficientCovariance = copy(coefficientCovariance);
+        coefficientCovariance = Matrices.copy(coefficientCovariance);
         structuralResiduals = structuralResiduals.clone();
         transformedResiduals = transformedResiduals.clone();
         lastRegressors = lastRegressors.clone();
@@ -47,7 +48,7 @@ public record Ar1GlsFit(Ar1Method method, RhoEstimate rho, int iterations, boole
 
     @Override
     public double[][] coefficientCovariance() {
-        return copy(coefficientCovariance);
+        return Matrices.copy(coefficientCovariance);
     }
 
     @Override
@@ -84,13 +85,5 @@ public record Ar1GlsFit(Ar1Method method, RhoEstimate rho, int iterations, boole
     /** u_n = y_n - x_n'b, the last structural residual, which forecasts carry forward as rho^h u_n. */
     public double lastStructuralResidual() {
         return structuralResiduals[structuralResiduals.length - 1];
-    }
-
-    private static double[][] copy(double[][] matrix) {
-        double[][] copy = new double[matrix.length][];
-        for (int i = 0; i < matrix.length; i++) {
-            copy[i] = matrix[i].clone();
-        }
-        return copy;
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.Matrices;
 
 /**
  * A regression design matrix X (n rows, k columns), kept column by column with a name for every
@@ -70,7 +71,7 @@ public final class Design {
      * @throws InvalidSpecificationException when there are no names (no columns)
      */
     public static Design generate(int rows, List<String> names, boolean hasIntercept, ColumnFiller filler) {
-        double[][] filled = new double[names.size()][rows];
+        double[][] filled = Matrices.zeros(names.size(), rows);
         for (int j = 0; j < filled.length; j++) {
             filler.fill(j, filled[j]);
         }
@@ -132,7 +133,7 @@ public final class Design {
     public double[][] toRows() {
         int n = rows();
         int k = width();
-        double[][] rows = new double[n][k];
+        double[][] rows = Matrices.zeros(n, k);
         for (int j = 0; j < k; j++) {
             double[] column = columns[j];
             for (int i = 0; i < n; i++) {

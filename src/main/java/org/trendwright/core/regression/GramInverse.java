@@ -1,6 +1,7 @@
 package org.trendwright.core.regression;
 
 import java.util.function.UnaryOperator;
+import org.trendwright.core.Matrices;
 
 /**
  * (X'X)^-1 from the QR factors, refined to about working precision.
@@ -51,7 +52,7 @@ final class GramInverse {
      * order, about cond(X)^2 u^2 relative, so the column is as accurate as that of {@link #refined}.
      */
     static double[] refinedColumn(double[][] x, PivotedQr qr, int j) {
-        double[][] unit = new double[x.length][1];
+        double[][] unit = Matrices.zeros(x.length, 1);
         unit[j][0] = 1;
         double[][] z = solveGram(qr, unit);
         refine(z, current -> solveGram(qr, columnResidual(x, current, j)));
@@ -99,7 +100,7 @@ final class GramInverse {
             high[row] = sum.value();
             low[row] = sum.lowPart();
         }
-        double[][] e = new double[z.length][1];
+        double[][] e = Matrices.zeros(z.length, 1);
         for (int i = 0; i < z.length; i++) {
             CompensatedDot sum = new CompensatedDot().add(i == j ? 1 : 0);
             for (int row = 0; row < n; row++) {
@@ -114,8 +115,8 @@ final class GramInverse {
     /** X'X as a pair of matrices {high, low} whose sum is the exact product to ~u^2. */
     private static double[][][] gram(double[][] x) {
         int k = x.length;
-        double[][] high = new double[k][k];
-        double[][] low = new double[k][k];
+        double[][] high = Matrices.zeros(k, k);
+        double[][] low = Matrices.zeros(k, k);
         for (int i = 0; i < k; i++) {
             for (int j = i; j < k; j++) {
                 CompensatedDot sum = new CompensatedDot();
@@ -134,7 +135,7 @@ final class GramInverse {
     /** E = I - G Z in double-double arithmetic, rounded. */
     private static double[][] residual(double[][][] gram, double[][] z) {
         int k = z.length;
-        double[][] e = new double[k][k];
+        double[][] e = Matrices.zeros(k, k);
         for (int i = 0; i < k; i++) {
             for (int j = 0; j < k; j++) {
                 CompensatedDot sum = new CompensatedDot().add(i == j ? 1 : 0);
@@ -152,7 +153,7 @@ final class GramInverse {
     private static double[][] solveGram(PivotedQr qr, double[][] e) {
         int k = e.length;
         int m = e[0].length;
-        double[][] result = new double[k][m];
+        double[][] result = Matrices.zeros(k, m);
         double[] pivoted = new double[k];
         for (int j = 0; j < m; j++) {
             for (int s = 0; s < k; s++) {
@@ -178,7 +179,7 @@ final class GramInverse {
 
     private static double[][] symmetrised(double[][] z) {
         int k = z.length;
-        double[][] result = new double[k][k];
+        double[][] result = Matrices.zeros(k, k);
         for (int i = 0; i < k; i++) {
             for (int j = 0; j < k; j++) {
                 result[i][j] = 0.5 * (z[i][j] + z[j][i]);

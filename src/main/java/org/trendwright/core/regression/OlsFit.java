@@ -1,6 +1,7 @@
 package org.trendwright.core.regression;
 
 import java.util.List;
+import org.trendwright.core.Matrices;
 
 /**
  * The result of an ordinary least-squares fit y = X b + e. Immutable and thread-safe: array
@@ -49,7 +50,7 @@ public record OlsFit(Design design, double[] y, List<Coefficient> coefficients, 
         coefficients = List.copyOf(coefficients);
         fitted = fitted.clone();
         residuals = residuals.clone();
-        xtxInverse = copy(xtxInverse);
+        xtxInverse = Matrices.copy(xtxInverse);
     }
 
     @Override
@@ -69,7 +70,7 @@ public record OlsFit(Design design, double[] y, List<Coefficient> coefficients, 
 
     @Override
     public double[][] xtxInverse() {
-        return copy(xtxInverse);
+        return Matrices.copy(xtxInverse);
     }
 
     /** Number of observations n. */
@@ -111,13 +112,5 @@ public record OlsFit(Design design, double[] y, List<Coefficient> coefficients, 
             }
         }
         return sum;
-    }
-
-    private static double[][] copy(double[][] matrix) {
-        double[][] copy = new double[matrix.length][];
-        for (int i = 0; i < matrix.length; i++) {
-            copy[i] = matrix[i].clone();
-        }
-        return copy;
     }
 }

@@ -1,6 +1,7 @@
 package org.trendwright.core.regression;
 
 import java.util.Arrays;
+import org.trendwright.core.Matrices;
 
 /**
  * Householder QR factorisation with column pivoting, X P = Q R, that keeps its reflectors so that
@@ -58,7 +59,7 @@ final class PivotedQr {
             pivot[j] = j;
         }
         double[] tau = new double[k];
-        double[][] r = new double[k][k];
+        double[][] r = Matrices.zeros(k, k);
         double[] remaining = new double[k];
         for (int s = 0; s < k; s++) {
             int chosen = largestRelativeRemainder(a, fullNorm, s, remaining);
@@ -108,7 +109,7 @@ final class PivotedQr {
                 kept[rank++] = pending[j];
             }
         }
-        double[][] r = new double[rank][rank];
+        double[][] r = Matrices.zeros(rank, rank);
         int[] order = new int[rank];
         for (int s = 0; s < rank; s++) {
             order[s] = s;
@@ -183,7 +184,7 @@ final class PivotedQr {
     double[][] inverseGram() {
         int k = pivot.length;
         double[][] rInverse = upperTriangularInverse();
-        double[][] inverse = new double[k][k];
+        double[][] inverse = Matrices.zeros(k, k);
         for (int a = 0; a < k; a++) {
             for (int c = a; c < k; c++) {
                 double sum = 0;
@@ -199,7 +200,7 @@ final class PivotedQr {
 
     private double[][] upperTriangularInverse() {
         int k = pivot.length;
-        double[][] inverse = new double[k][k];
+        double[][] inverse = Matrices.zeros(k, k);
         for (int j = 0; j < k; j++) {
             inverse[j][j] = 1 / r[j][j];
             for (int i = j - 1; i >= 0; i--) {

@@ -1,6 +1,7 @@
 package org.trendwright.core.regression;
 
 import java.util.Arrays;
+import org.trendwright.core.Matrices;
 import org.trendwright.core.RankDeficientDesignException;
 
 /**
@@ -43,7 +44,7 @@ final class ScaledDesign {
     static ScaledDesign of(Design design) {
         int k = design.width();
         double[][] source = design.sharedColumns();
-        double[][] columns = new double[k][design.rows()];
+        double[][] columns = Matrices.zeros(k, design.rows());
         double[] lengths = new double[k];
         double[] scales = new double[k];
         for (int j = 0; j < k; j++) {
@@ -104,7 +105,7 @@ final class ScaledDesign {
     /** R of the columns scaled to unit length: column s of qr's R divided by its column's length. */
     double[][] unitLengthR(PivotedQr qr) {
         int k = qr.width();
-        double[][] unitR = new double[k][k];
+        double[][] unitR = Matrices.zeros(k, k);
         for (int i = 0; i < k; i++) {
             for (int j = i; j < k; j++) {
                 unitR[i][j] = qr.r(i, j) / lengths[qr.pivot(j)];

@@ -1,5 +1,7 @@
 package org.trendwright.core.regression;
 
+import org.trendwright.core.Matrices;
+
 /**
  * The singular values of a small square matrix by one-sided Jacobi rotations (Hestenes 1958,
  * "Inversion of matrices by biorthogonalization and related results", J. SIAM 6, 51-90): plane
@@ -54,7 +56,7 @@ final class SmallSingularValues {
     /** The singular values of the square matrix {@code a} (left unchanged), in no particular order. */
     static double[] of(double[][] a) {
         int k = a.length;
-        double[][] columns = new double[k][k];
+        double[][] columns = Matrices.zeros(k, k);
         for (int i = 0; i < k; i++) {
             for (int j = 0; j < k; j++) {
                 columns[j][i] = a[i][j];

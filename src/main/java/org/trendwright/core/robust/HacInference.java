@@ -1,6 +1,7 @@
 package org.trendwright.core.robust;
 
 import java.util.List;
+import org.trendwright.core.Matrices;
 import org.trendwright.core.regression.Coefficient;
 
 /**
@@ -21,12 +22,12 @@ public record HacInference(List<Coefficient> coefficients, double[][] covariance
 
     public HacInference {
         coefficients = List.copyOf(coefficients);
-        covariance = copy(covariance);
+        covariance = Matrices.copy(covariance);
     }
 
     @Override
     public double[][] covariance() {
-        return copy(covariance);
+        return Matrices.copy(covariance);
     }
 
     /** The coefficient of the regressor with this name. */
@@ -38,13 +39,5 @@ public record HacInference(List<Coefficient> coefficients, double[][] covariance
     /** The HAC standard errors as an array, in the design's column order. */
     public double[] standardErrors() {
         return coefficients.stream().mapToDouble(Coefficient::standardError).toArray();
-    }
-
-    private static double[][] copy(double[][] matrix) {
-        double[][] copy = new double[matrix.length][];
-        for (int i = 0; i < matrix.length; i++) {
-            copy[i] = matrix[i].clone();
-        }
-        return copy;
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.trendwright.core.InvalidSpecificationException;
+import org.trendwright.core.Matrices;
 import org.trendwright.core.StudentT;
 import org.trendwright.core.regression.Coefficient;
 import org.trendwright.core.regression.OlsFit;
@@ -106,7 +107,7 @@ public final class NeweyWest {
     /** Gamma_l = sum_{t=l+1..n} u_t u_{t-l}'. */
     private static double[][] crossProducts(double[][] u, int l) {
         int k = u[0].length;
-        double[][] gamma = new double[k][k];
+        double[][] gamma = Matrices.zeros(k, k);
         for (int t = l; t < u.length; t++) {
             for (int i = 0; i < k; i++) {
                 for (int j = 0; j < k; j++) {
@@ -132,7 +133,7 @@ public final class NeweyWest {
 
     private static double[][] product(double[][] a, double[][] b) {
         int k = a.length;
-        double[][] c = new double[k][k];
+        double[][] c = Matrices.zeros(k, k);
         for (int i = 0; i < k; i++) {
             for (int m = 0; m < k; m++) {
                 for (int j = 0; j < k; j++) {
