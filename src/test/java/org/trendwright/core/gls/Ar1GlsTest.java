@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -183,6 +184,34 @@ class Ar1GlsTest {
         // large-sample value sqrt((1 - rho^2)/n) = 0.041 (Mann & Wald 1943) within 15%.
         assertEquals(Math.sqrt(squares / (n - 2) / lagged), fit.rho().standardError(), 1e-7);
         assertEquals(Math.sqrt((1 - RHO * RHO) / n), fit.rho().standardError(), 0.15 * 0.041);
+    }
+
+    @ParameterizedTest
+    @EnumSource(Ar1Method.class)
+    void estimate_reports_the_qr_solution_at_its_rho_and_a_fixed_point_as_fit_does(Ar1Method method) {
+        // The steering steps solve the normal equations; the last step is the QR route's, so b and the
+        // transformed residuals are LeastSquares.estimates at the reported rho bit for bit, and that
+        // rho reproduces itself from the structural residuals to the tolerance (Cochrane & Orcutt 1949).
+        SplittableRandom random = new SplittableRandom(2026_12_02L);
+        for (double rho : new double[] {-0.5, 0.3, 0.7, 0.95}) {
+            int n = 40 + random.nextInt(200);
+            double[] y = Ar1Series.trendPlus(Ar1Series.errors(random, n, rho, 1));
+            Design design = Ar1Series.trendDesign(n);
+            Ar1GlsEstimate estimate = Ar1Gls.estimate(design, y, method, Ar1Gls.DEFAULT_TOLERANCE,
+                    Ar1Gls.DEFAULT_MAX_ITERATIONS);
+            double used = estimate.rho().value();
+            LeastSquares.Estimates qr = LeastSquares.estimates(Ar1Gls.transform(design, used, method),
+                    Ar1Gls.transform(y, used, method));
+            assertTrue(estimate.converged(), "rho " + rho);
+            assertEquals(List.of(qr.coefficients()[0], qr.coefficients()[1]),
+                    List.of(estimate.coefficients()[0], estimate.coefficients()[1]), "rho " + rho);
+            assertEquals(Arrays.toString(qr.residuals()),
+                    Arrays.toString(estimate.transformedResiduals()), "rho " + rho);
+            assertEquals(used, throughOriginRho(estimate.structuralResiduals()), Ar1Gls.DEFAULT_TOLERANCE);
+            Ar1GlsFit fit = Ar1Gls.fit(design, y, method, Ar1Gls.DEFAULT_TOLERANCE, Ar1Gls.DEFAULT_MAX_ITERATIONS);
+            assertEquals(used, fit.rho().value(), 0.0);
+            assertEquals(estimate.iterations(), fit.iterations());
+        }
     }
 
     @Test
