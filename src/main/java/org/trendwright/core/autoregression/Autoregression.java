@@ -106,8 +106,14 @@ public final class Autoregression {
 
     /** The lags 1..p, with the seasonal lag s appended when s > p (s = 0: none). */
     static int[] lags(int order, int seasonal) {
-        IntStream lags = IntStream.rangeClosed(1, order);
-        return seasonal > order ? IntStream.concat(lags, IntStream.of(seasonal)).toArray() : lags.toArray();
+        int[] lags = new int[seasonal > order ? order + 1 : order];
+        for (int i = 0; i < order; i++) {
+            lags[i] = i + 1;
+        }
+        if (seasonal > order) {
+            lags[order] = seasonal;
+        }
+        return lags;
     }
 
     /**
@@ -119,7 +125,10 @@ public final class Autoregression {
         IntStream others = IntStream.rangeClosed(1, maxOrder).filter(lag -> lag != seasonal);
         int[] nestingOrder = seasonal > 0 ? IntStream.concat(IntStream.of(seasonal), others).toArray()
                                           : others.toArray();
-        int[] widths = IntStream.rangeClosed(0, maxOrder).map(p -> 1 + lags(p, seasonal).length).toArray();
+        int[] widths = new int[maxOrder + 1];
+        for (int p = 0; p <= maxOrder; p++) {
+            widths[p] = 1 + lags(p, seasonal).length;
+        }
         return OrderSelection.compareNested(design(w, nestingOrder, start), LagDesigns.lagged(w, 0, start), widths);
     }
 
