@@ -68,7 +68,6 @@ document.addEventListener('securitypolicyviolation', (e) => {
 async function start() {
   await session.load();
   window.addEventListener('hashchange', route);
-  document.addEventListener('trendwright:session', route);
   await route();
   document.body.dataset.ready = 'true';
 }
