@@ -1,5 +1,6 @@
 package org.trendwright.core.selection;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.trendwright.core.Observations;
 import org.trendwright.core.forecast.ForecastPoint;
@@ -27,5 +28,19 @@ public interface Candidate {
     default double[] pointForecasts(Observations training, int horizon) {
         return fit(training).forecast(horizon, List.of(0.95)).points().stream().mapToDouble(ForecastPoint::value)
                 .toArray();
+    }
+
+    /**
+     * The point forecasts from several training ends of one series: for each i, the values of
+     * {@code pointForecasts(series.head(ends[i]), horizons[i])}, computed in the order given (so the
+     * first end that fails is the one reported). An implementation may share work between the ends
+     * but must give those numbers.
+     */
+    default List<double[]> pointForecastsFromEnds(Observations series, int[] ends, int[] horizons) {
+        List<double[]> forecasts = new ArrayList<>(ends.length);
+        for (int i = 0; i < ends.length; i++) {
+            forecasts.add(pointForecasts(series.head(ends[i]), horizons[i]));
+        }
+        return forecasts;
     }
 }

@@ -3,9 +3,11 @@ package org.trendwright.core.selection;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.ModelException;
 import org.trendwright.core.Observations;
@@ -33,8 +35,9 @@ import org.trendwright.core.TestResult;
  * <p>Cost: each candidate is fitted in full once, on the whole series, for its residual checks and
  * likelihood. Out of sample it is refitted once per training end (the holdout split and each
  * origin; the holdout split is usually an origin too, and an origin's one-step forecast is the
- * first of its forecasts), for its point forecasts only ({@link Candidate#pointForecasts}), which
- * give the same numbers as the full fit's forecast without its intervals and inference.
+ * first of its forecasts), for its point forecasts only ({@link Candidate#pointForecastsFromEnds}),
+ * which give the numbers of the full fit's forecast without its intervals and inference; a trend
+ * candidate takes every end from one pass over the series.
  *
  * <p>Stateless and thread-safe.
  */
@@ -78,31 +81,30 @@ public final class ModelSelection {
 
     /**
      * The candidate's point forecasts from each training end the comparison uses (the holdout's,
-     * then each rolling origin's), up to {@code holdout} observations ahead. Each end is fitted
-     * once: the holdout split is often one of the origins, and an origin's one-step forecast is
-     * the first of its forecasts (a point forecast does not depend on how far the forecast runs).
+     * then each rolling origin's), up to {@code holdout} observations ahead, through the observed
+     * periods after the end (a gap in the series is forecast through). Each end is fitted once: the
+     * holdout split is often one of the origins, and an origin's one-step forecast is the first of
+     * its forecasts (a point forecast does not depend on how far the forecast runs).
      */
     private static Map<Integer, double[]> forecastsByEnd(Observations series, Candidate candidate,
                                                          ComparisonSpec spec) {
-        Map<Integer, double[]> byEnd = new HashMap<>();
-        byEnd.put(series.size() - spec.holdout(), forecastFrom(series, series.size() - spec.holdout(), candidate,
-                spec.holdout()));
+        Set<Integer> ends = new LinkedHashSet<>();
+        ends.add(series.size() - spec.holdout());
         for (int end = series.size() - spec.origins(); end < series.size(); end++) {
-            if (!byEnd.containsKey(end)) {
-                byEnd.put(end, forecastFrom(series, end, candidate, spec.holdout()));
-            }
+            ends.add(end);
+        }
+        int[] endArray = ends.stream().mapToInt(Integer::intValue).toArray();
+        int[] horizons = new int[endArray.length];
+        for (int i = 0; i < endArray.length; i++) {
+            int last = Math.min(series.size(), endArray[i] + spec.holdout());
+            horizons[i] = series.timeAt(last - 1) - series.timeAt(endArray[i] - 1);
+        }
+        List<double[]> forecasts = candidate.pointForecastsFromEnds(series, endArray, horizons);
+        Map<Integer, double[]> byEnd = new HashMap<>();
+        for (int i = 0; i < endArray.length; i++) {
+            byEnd.put(endArray[i], forecasts.get(i));
         }
         return byEnd;
-    }
-
-    /**
-     * Fits to the first {@code end} observations and forecasts through the observed periods after
-     * them, up to {@code steps} observations ahead (a gap in the series is forecast through).
-     */
-    private static double[] forecastFrom(Observations series, int end, Candidate candidate, int steps) {
-        Observations training = series.head(end);
-        int last = Math.min(series.size(), end + steps);
-        return candidate.pointForecasts(training, series.timeAt(last - 1) - training.lastTime());
     }
 
     private static AccuracyMeasures holdout(Observations series, Map<Integer, double[]> forecasts,

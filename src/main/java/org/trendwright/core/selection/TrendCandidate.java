@@ -1,7 +1,9 @@
 package org.trendwright.core.selection;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.function.Function;
+import org.trendwright.core.ModelException;
 import org.trendwright.core.Observations;
 import org.trendwright.core.TestResult;
 import org.trendwright.core.forecast.Forecast;
@@ -34,6 +36,23 @@ public record TrendCandidate(TrendSpec spec, Function<TrendFit, List<TestResult>
     @Override
     public double[] pointForecasts(Observations training, int horizon) {
         return TrendRegression.of(training, spec).pointForecasts(horizon);
+    }
+
+    /**
+     * The forecasts from every training end by one pass over the longest
+     * ({@link TrendRegression#prefixPointForecasts}); where that regression cannot be set up (too
+     * short, a value a log-scale model refuses), each end is refitted in turn, as the interface's
+     * default does, so that the same end's error is reported.
+     */
+    @Override
+    public List<double[]> pointForecastsFromEnds(Observations series, int[] ends, int[] horizons) {
+        TrendRegression longest;
+        try {
+            longest = TrendRegression.of(series.head(Arrays.stream(ends).max().orElseThrow()), spec);
+        } catch (ModelException e) {
+            return Candidate.super.pointForecastsFromEnds(series, ends, horizons);
+        }
+        return longest.prefixPointForecasts(ends, horizons);
     }
 
     private record Fitted(TrendFit fit, Function<TrendFit, List<TestResult>> checks) implements CandidateFit {

@@ -1,7 +1,6 @@
 package org.trendwright.core.gls;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -10,14 +9,14 @@ import java.util.Optional;
 import java.util.SplittableRandom;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
-import org.junit.jupiter.params.provider.ValueSource;
 import org.trendwright.core.regression.Design;
 import org.trendwright.core.regression.LeastSquares;
-import org.trendwright.testing.ReferenceData;
+import org.trendwright.core.regression.NormalEquations;
 
 /**
- * The normal-equations steps of the GLS iteration: where they answer, within the normal equations'
- * error bound of the least-squares solution; where the design is ill conditioned, no answer.
+ * The normal-equations steps of the GLS iteration against the QR route on the quasi-differenced
+ * data, over the stationary range of rho. {@link NormalEquations} itself is checked against NIST
+ * StRD in NormalEquationsTest.
  */
 class QuasiDifferencedNormalEquationsTest {
 
@@ -26,32 +25,6 @@ class QuasiDifferencedNormalEquationsTest {
      * Algorithms, 2nd ed., section 20.4), u = 1.1e-16.
      */
     private static final double NORMAL_EQUATIONS_BOUND = 1e-10;
-
-    @ParameterizedTest
-    @ValueSource(strings = {"Norris", "NoInt1", "NoInt2"})
-    void at_rho_zero_give_nist_certified_coefficients_on_well_conditioned_datasets(String dataset) {
-        // NIST StRD linear least squares (https://www.itl.nist.gov/div898/strd/lls/lls.shtml), copied
-        // under src/test/resources/reference/nist-strd: at rho = 0 the Prais-Winsten quasi-difference
-        // is the identity, so b(0) is the ordinary least-squares solution NIST certifies.
-        Design design = nistLinear(dataset);
-        double[] b = QuasiDifferencedNormalEquations.coefficients(design, nistResponse(dataset), 0,
-                Ar1Method.PRAIS_WINSTEN).orElseThrow();
-        double[] certified = certifiedCoefficients(dataset);
-        for (int j = 0; j < b.length; j++) {
-            assertEquals(certified[j], b[j], NORMAL_EQUATIONS_BOUND * Math.abs(certified[j]), dataset + " b" + j);
-        }
-    }
-
-    @ParameterizedTest
-    @ValueSource(strings = {"Longley", "Wampler4", "Filip"})
-    void decline_the_ill_conditioned_nist_datasets(String dataset) {
-        // NIST rates these "higher" difficulty: cond(X) of the unit-scaled columns is far above 100
-        // (Longley's x1..x6 are nearly collinear; Wampler4 and Filip are degree 5 and 10
-        // polynomials), where the normal equations lose too many digits (Higham 2002, section 20.4).
-        Design design = "Longley".equals(dataset) ? longley() : polynomial(dataset, "Filip".equals(dataset) ? 10 : 5);
-        assertTrue(QuasiDifferencedNormalEquations.coefficients(design, nistResponse(dataset), 0,
-                Ar1Method.PRAIS_WINSTEN).isEmpty(), dataset);
-    }
 
     @ParameterizedTest
     @EnumSource(Ar1Method.class)
@@ -102,55 +75,5 @@ class QuasiDifferencedNormalEquationsTest {
             columns.add(dummy);
         }
         return new Design(columns, List.of("constant", "t", "Q2", "Q3", "Q4"), true);
-    }
-
-    private static double[] nistResponse(String dataset) {
-        return ReferenceData.column("nist-strd/" + dataset + ".csv", 0);
-    }
-
-    /** NIST's model for Norris (y = b0 + b1 x) and the NoInt sets (y = b1 x). */
-    private static Design nistLinear(String dataset) {
-        return dataset.startsWith("NoInt") ? new Design(List.of(x(dataset)), List.of("x"), false)
-                : polynomial(dataset, 1);
-    }
-
-    private static Design polynomial(String dataset, int degree) {
-        double[] x = x(dataset);
-        List<double[]> columns = new ArrayList<>();
-        List<String> names = new ArrayList<>();
-        for (int power = 0; power <= degree; power++) {
-            double[] column = new double[x.length];
-            for (int i = 0; i < x.length; i++) {
-                column[i] = StrictMath.pow(x[i], power);
-            }
-            columns.add(column);
-            names.add("x^" + power);
-        }
-        return new Design(columns, names, true);
-    }
-
-    private static Design longley() {
-        List<double[]> columns = new ArrayList<>();
-        List<String> names = new ArrayList<>();
-        double[] constant = new double[nistResponse("Longley").length];
-        Arrays.fill(constant, 1);
-        columns.add(constant);
-        names.add("constant");
-        for (int j = 1; j <= 6; j++) {
-            columns.add(ReferenceData.column("nist-strd/Longley.csv", j));
-            names.add("x" + j);
-        }
-        return new Design(columns, names, true);
-    }
-
-    private static double[] x(String dataset) {
-        return ReferenceData.column("nist-strd/" + dataset + ".csv", 1);
-    }
-
-    private static double[] certifiedCoefficients(String dataset) {
-        return ReferenceData.rows("nist-strd/" + dataset + ".certified.csv").stream()
-                .filter(row -> row[0].startsWith("coef_B"))
-                .mapToDouble(row -> Double.parseDouble(row[1]))
-                .toArray();
     }
 }

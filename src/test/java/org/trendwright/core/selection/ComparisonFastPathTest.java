@@ -1,6 +1,7 @@
 package org.trendwright.core.selection;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
@@ -8,17 +9,21 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
+import org.trendwright.core.ModelException;
 import org.trendwright.core.Observations;
 import org.trendwright.core.TestResult;
 import org.trendwright.core.forecast.Forecast;
+import org.trendwright.core.trend.TrendSpec;
 
 /**
  * The comparison refits each candidate once per training end and takes the point forecasts alone
- * ({@link Candidate#pointForecasts}); the straightforward way fits every candidate in full for
- * every split (the holdout, each rolling origin, each origin again for its one-step error) and
+ * ({@link Candidate#pointForecastsFromEnds}); the straightforward way fits every candidate in full
+ * for every split (the holdout, each rolling origin, each origin again for its one-step error) and
  * reads the values off the full forecast. Both must give the same comparison: the same
- * recommendation and every metric equal to 1e-9 relative (the fast path runs the same arithmetic,
- * so the agreement is in fact exact; 1e-9 leaves room for a change of rounding order elsewhere).
+ * recommendation and every metric equal to 1e-9 relative. Most candidates run the same arithmetic
+ * either way; trend candidates solve each training end by the normal equations, whose coefficients
+ * are within about c u cond(X)^2 of the QR route's (Higham 2002, Accuracy and Stability of
+ * Numerical Algorithms, section 20.4): near 1e-12 on these designs, so 1e-9 holds with room.
  *
  * <p>The series are seeded simulations of the shapes the service meets: random walks with drift
  * (the batch benchmark's), a trend with seasons and AR(1) noise (the JMH benchmark's), exponential
@@ -60,6 +65,40 @@ class ComparisonFastPathTest {
                 }
             }
         }
+    }
+
+    @Test
+    void forecasts_from_several_ends_are_those_of_a_refit_at_each_end_in_the_order_given() {
+        for (Observations series : seededSeries()) {
+            int n = series.size();
+            int[] ends = {n - 4, n - 1, n - 8, n - 5, n - 2};
+            int[] horizons = {4, 1, 6, 2, 3};
+            for (Candidate candidate : StandardCandidates.forSeries(series, 0.05)) {
+                List<double[]> fromEnds = candidate.pointForecastsFromEnds(series, ends, horizons);
+                for (int e = 0; e < ends.length; e++) {
+                    double[] refit = candidate.pointForecasts(series.head(ends[e]), horizons[e]);
+                    assertEquals(refit.length, fromEnds.get(e).length);
+                    for (int h = 0; h < refit.length; h++) {
+                        assertClose(refit[h], fromEnds.get(e)[h], candidate.name() + " end " + ends[e] + " h=" + (h + 1));
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
+    void a_training_end_too_short_for_a_trend_fails_as_its_own_refit_does() {
+        // The quadratic trend with quarterly dummies has 6 coefficients: 6 observations cannot fit it
+        // (common practice: least squares needs more observations than coefficients).
+        Observations series = seededSeries().get(0);
+        Candidate candidate = StandardCandidates.forSeries(series, 0.05).stream()
+                .filter(c -> c.name().equals(new TrendCandidate(TrendSpec.quadratic().withSeasonalDummies(true),
+                        f -> List.of()).name()))
+                .findFirst().orElseThrow();
+        ModelException refit = assertThrows(ModelException.class, () -> candidate.pointForecasts(series.head(6), 2));
+        ModelException fromEnds = assertThrows(ModelException.class,
+                () -> candidate.pointForecastsFromEnds(series, new int[] {40, 6, 20}, new int[] {2, 2, 2}));
+        assertEquals(refit.getMessage(), fromEnds.getMessage());
     }
 
     private static void assertSame(CandidateAssessment expected, CandidateAssessment actual) {
