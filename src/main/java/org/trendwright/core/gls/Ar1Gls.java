@@ -86,9 +86,9 @@ public final class Ar1Gls {
     /**
      * The iteration of {@link #fit} without the inference of its final transformed regression, for
      * callers that need point forecasts only. The steps that only steer rho towards its fixed point
-     * solve the transformed regression by its normal equations ({@link QuasiDifferencedNormalEquations},
-     * a fifth of the QR route's work on a quarterly trend design, when the design is clearly well
-     * conditioned); the step that ends the iteration, converged or at the cap, is always solved by
+     * solve the transformed regression by its normal equations ({@link QuasiDifferencedNormalEquations}:
+     * no transformed design is built, and a design that is not clearly well conditioned is left to
+     * QR); the step that ends the iteration, converged or at the cap, is always solved by
      * {@link LeastSquares#estimates}, and convergence is judged on that step. Should it disagree with
      * the quick steps (rho moving by the tolerance or more), the iteration goes on by QR alone. So
      * the returned b and residuals are those of the QR route at the returned rho, which
