@@ -133,10 +133,15 @@ public final class Ar1Gls {
         }
     }
 
-    /** A normal-equations step at {@code rho}, or null where that step declines. */
+    /**
+     * A normal-equations step at {@code rho}, or null where the normal equations decline or the next
+     * rho is undefined or outside (-1, 1): the QR step then decides, so that only it ever refuses a
+     * series.
+     */
     private static Step quickStep(Design design, double[] y, double rho, Ar1Method method) {
         return QuasiDifferencedNormalEquations.coefficients(design, y, rho, method)
                 .map(b -> Step.from(design, y, b))
+                .filter(step -> Math.abs(step.next().value()) < 1)
                 .orElse(null);
     }
 
