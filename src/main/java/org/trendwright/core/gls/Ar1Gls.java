@@ -1,5 +1,6 @@
 package org.trendwright.core.gls;
 
+import java.util.function.Supplier;
 import org.trendwright.core.InsufficientDataException;
 import org.trendwright.core.InvalidSpecificationException;
 import org.trendwright.core.diagnostics.DurbinWatson;
@@ -86,14 +87,14 @@ public final class Ar1Gls {
     /**
      * The iteration of {@link #fit} without the inference of its final transformed regression, for
      * callers that need point forecasts only. The steps that only steer rho towards its fixed point
-     * solve the transformed regression by its normal equations ({@link QuasiDifferencedNormalEquations}:
-     * no transformed design is built, and a design that is not clearly well conditioned is left to
-     * QR); the step that ends the iteration, converged or at the cap, is always solved by
-     * {@link LeastSquares#estimates}, and convergence is judged on that step. Should it disagree with
-     * the quick steps (rho moving by the tolerance or more), the iteration goes on by QR alone. So
-     * the returned b and residuals are those of the QR route at the returned rho, which
-     * {@link #fit} then refits with full inference; the quick steps can move rho and the iteration
-     * count only as far as rounding can (about u cond(X*)^2 in each b).
+     * solve the transformed regression by its normal equations, from moments summed once
+     * ({@link QuasiDifferencedNormalEquations}: no transformed design is built, and a design that is
+     * not clearly well conditioned is left to QR); the step that ends the iteration, converged or at
+     * the cap, is always solved by {@link LeastSquares#estimates}, and convergence is judged on that
+     * step. Should it disagree with the quick steps (rho moving by the tolerance or more), the
+     * iteration goes on by QR alone. So the returned b and residuals are those of the QR route at the
+     * returned rho, which {@link #fit} then refits with full inference; the quick steps can move rho
+     * and the iteration count only as far as rounding can (about u cond(X*)^2 in each b).
      *
      * @throws InsufficientDataException     as {@link #fit}
      * @throws InvalidSpecificationException as {@link #fit}
@@ -101,15 +102,39 @@ public final class Ar1Gls {
      */
     public static Ar1GlsEstimate estimate(Design design, double[] y, Ar1Method method, double tolerance,
                                           int maxIterations) {
+        return iterate(design, y, () -> QuasiDifferencedNormalEquations.of(design, y), method, tolerance,
+                maxIterations);
+    }
+
+    /**
+     * As {@link #estimate(Design, double[], Ar1Method, double, int)} with the moments of these rows
+     * already summed (one of {@link QuasiDifferencedNormalEquations#ofPrefixes}), so that the fits to
+     * the prefixes of one design share one pass; the result is bit for bit the other method's.
+     *
+     * @throws IllegalArgumentException when the moments were summed over another number of rows or
+     *                                  regressors
+     */
+    public static Ar1GlsEstimate estimate(Design design, double[] y, QuasiDifferencedNormalEquations moments,
+                                          Ar1Method method, double tolerance, int maxIterations) {
+        if (moments.rows() != design.rows() || moments.width() != design.width()) {
+            throw new IllegalArgumentException("The moments cover " + moments.rows() + " rows of " + moments.width()
+                    + " regressors, the design " + design.rows() + " of " + design.width() + ".");
+        }
+        return iterate(design, y, () -> moments, method, tolerance, maxIterations);
+    }
+
+    private static Ar1GlsEstimate iterate(Design design, double[] y, Supplier<QuasiDifferencedNormalEquations> moments,
+                                          Ar1Method method, double tolerance, int maxIterations) {
         checkOptions(tolerance, maxIterations);
         checkSize(design, method);
         LeastSquares.Estimates ols = LeastSquares.estimates(design, y);
         checkNoise(ols, y);
+        QuasiDifferencedNormalEquations equations = moments.get();
         RhoEstimate rho = stationary(RhoEstimate.fromResiduals(ols.residuals()), 0);
         double anchor = Double.NaN;
         boolean steering = true;
         for (int iteration = 1; ; iteration++) {
-            Step step = steering ? quickStep(design, y, rho.value(), method) : null;
+            Step step = steering ? quickStep(equations, design, y, rho.value(), method) : null;
             if (step == null || Math.abs(step.next().value() - rho.value()) < tolerance || iteration == maxIterations) {
                 LeastSquares.Estimates transformed = LeastSquares.estimates(transform(design, rho.value(), method),
                         transform(y, rho.value(), method));
@@ -138,8 +163,9 @@ public final class Ar1Gls {
      * rho is undefined or outside (-1, 1): the QR step then decides, so that only it ever refuses a
      * series.
      */
-    private static Step quickStep(Design design, double[] y, double rho, Ar1Method method) {
-        return QuasiDifferencedNormalEquations.coefficients(design, y, rho, method)
+    private static Step quickStep(QuasiDifferencedNormalEquations equations, Design design, double[] y, double rho,
+                                  Ar1Method method) {
+        return equations.coefficients(rho, method)
                 .map(b -> Step.from(design, y, b))
                 .filter(step -> Math.abs(step.next().value()) < 1)
                 .orElse(null);

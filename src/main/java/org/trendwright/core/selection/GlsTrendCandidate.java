@@ -1,5 +1,7 @@
 package org.trendwright.core.selection;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.trendwright.core.ModelException;
 import org.trendwright.core.Observations;
@@ -11,6 +13,7 @@ import org.trendwright.core.gls.Ar1Gls;
 import org.trendwright.core.gls.Ar1GlsEstimate;
 import org.trendwright.core.gls.Ar1GlsFit;
 import org.trendwright.core.gls.Ar1Method;
+import org.trendwright.core.gls.QuasiDifferencedNormalEquations;
 import org.trendwright.core.regression.GaussianLikelihood;
 import org.trendwright.core.trend.BackTransformed;
 import org.trendwright.core.trend.TrendFit;
@@ -49,12 +52,45 @@ public record GlsTrendCandidate(TrendSpec trend, double level) implements Candid
     @Override
     public double[] pointForecasts(Observations training, int horizon) {
         TrendRegression regression = TrendRegression.of(training, trend);
-        Ar1GlsEstimate gls = Ar1Gls.estimate(regression.design(), regression.response(), Ar1Method.PRAIS_WINSTEN,
-                Ar1Gls.DEFAULT_TOLERANCE, Ar1Gls.DEFAULT_MAX_ITERATIONS);
+        return forecasts(regression, horizon, Ar1Gls.estimate(regression.design(), regression.response(),
+                Ar1Method.PRAIS_WINSTEN, Ar1Gls.DEFAULT_TOLERANCE, Ar1Gls.DEFAULT_MAX_ITERATIONS));
+    }
+
+    /**
+     * The forecasts {@link #pointForecasts} gives at each training end, bit for bit, with the moments
+     * that steer each end's GLS iteration summed in one pass over the longest prefix
+     * ({@link QuasiDifferencedNormalEquations#ofPrefixes}: a prefix's design is the first rows of the
+     * longest one, each row a function of its period index alone) instead of once per end. A series
+     * whose longest prefix has no regression is left to the end-by-end route, which reports the
+     * first failing end's error; so does every end here, in the same order.
+     */
+    @Override
+    public List<double[]> pointForecastsFromEnds(Observations series, int[] ends, int[] horizons) {
+        if (ends.length == 0) {
+            return List.of();
+        }
+        List<QuasiDifferencedNormalEquations> moments;
+        try {
+            TrendRegression longest = TrendRegression.of(series.head(Arrays.stream(ends).max().orElseThrow()), trend);
+            moments = QuasiDifferencedNormalEquations.ofPrefixes(longest.design(), longest.response(), ends);
+        } catch (ModelException e) {
+            return Candidate.super.pointForecastsFromEnds(series, ends, horizons);
+        }
+        List<double[]> forecasts = new ArrayList<>(ends.length);
+        for (int i = 0; i < ends.length; i++) {
+            TrendRegression regression = TrendRegression.of(series.head(ends[i]), trend);
+            forecasts.add(forecasts(regression, horizons[i], Ar1Gls.estimate(regression.design(),
+                    regression.response(), moments.get(i), Ar1Method.PRAIS_WINSTEN, Ar1Gls.DEFAULT_TOLERANCE,
+                    Ar1Gls.DEFAULT_MAX_ITERATIONS)));
+        }
+        return forecasts;
+    }
+
+    private double[] forecasts(TrendRegression regression, int horizon, Ar1GlsEstimate gls) {
         double[][] rows = new double[horizon][];
         int[] times = new int[horizon];
         for (int h = 1; h <= horizon; h++) {
-            times[h - 1] = training.lastTime() + h;
+            times[h - 1] = regression.series().lastTime() + h;
             rows[h - 1] = regression.regressorsAt(times[h - 1]);
         }
         double[] values = gls.pointForecasts(rows, times);

@@ -1,11 +1,15 @@
 package org.trendwright.core.gls;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.trendwright.core.regression.Design;
@@ -13,8 +17,8 @@ import org.trendwright.core.regression.LeastSquares;
 import org.trendwright.core.regression.NormalEquations;
 
 /**
- * The normal-equations steps of the GLS iteration against the QR route on the quasi-differenced
- * data, over the stationary range of rho. {@link NormalEquations} itself is checked against NIST
+ * The normal-equations steps of the GLS iteration, from moments summed once, against the QR route
+ * on the quasi-differenced data, over the stationary range of rho; and the moments of prefixes. {@link NormalEquations} itself is checked against NIST
  * StRD in NormalEquationsTest.
  */
 class QuasiDifferencedNormalEquationsTest {
@@ -39,7 +43,7 @@ class QuasiDifferencedNormalEquationsTest {
             double[] y = Ar1Series.trendPlus(Ar1Series.errors(random, n, 0.8, 2.0));
             for (double rho : new double[] {-0.9, -0.3, 0, 0.5, 0.9, 0.97, 0.995}) {
                 String where = "n = " + n + ", rho = " + rho;
-                double[] quick = QuasiDifferencedNormalEquations.coefficients(design, y, rho, method)
+                double[] quick = QuasiDifferencedNormalEquations.of(design, y).coefficients(rho, method)
                         .orElseThrow(() -> new AssertionError("declined at " + where));
                 double[] accurate = LeastSquares.estimates(Ar1Gls.transform(design, rho, method),
                         Ar1Gls.transform(y, rho, method)).coefficients();
@@ -50,6 +54,39 @@ class QuasiDifferencedNormalEquationsTest {
                 }
             }
         }
+    }
+
+    @ParameterizedTest
+    @EnumSource(Ar1Method.class)
+    void the_moments_of_every_prefix_from_one_pass_are_those_of_the_prefix_alone(Ar1Method method) {
+        // The same sums in the same order, so the same bits (common practice: floating-point addition
+        // is deterministic for a fixed order of operands).
+        SplittableRandom random = new SplittableRandom(2026_12_03L);
+        int n = 80;
+        Design design = quarterlyTrend(n);
+        double[] y = Ar1Series.trendPlus(Ar1Series.errors(random, n, 0.6, 1.5));
+        int[] ends = {72, 80, 40, 73, 79};
+        List<QuasiDifferencedNormalEquations> prefixes = QuasiDifferencedNormalEquations.ofPrefixes(design, y, ends);
+        for (int e = 0; e < ends.length; e++) {
+            QuasiDifferencedNormalEquations alone = QuasiDifferencedNormalEquations.of(quarterlyTrend(ends[e]),
+                    Arrays.copyOf(y, ends[e]));
+            assertEquals(ends[e], prefixes.get(e).rows());
+            for (double rho : new double[] {-0.5, 0, 0.7, 0.99}) {
+                assertArrayEquals(alone.coefficients(rho, method).orElseThrow(),
+                        prefixes.get(e).coefficients(rho, method).orElseThrow(), "end " + ends[e] + ", rho " + rho);
+            }
+        }
+    }
+
+    @Test
+    void prefixes_longer_than_the_design_or_empty_are_refused() {
+        Design design = quarterlyTrend(20);
+        double[] y = new double[20];
+        IllegalArgumentException tooLong = assertThrows(IllegalArgumentException.class,
+                () -> QuasiDifferencedNormalEquations.ofPrefixes(design, y, new int[] {10, 21}));
+        assertTrue(tooLong.getMessage().contains("1 to 20 rows"), tooLong.getMessage());
+        assertThrows(IllegalArgumentException.class,
+                () -> QuasiDifferencedNormalEquations.ofPrefixes(design, new double[19], new int[] {10}));
     }
 
     private static Design quarterlyTrend(int n) {

@@ -1,5 +1,6 @@
 package org.trendwright.core.selection;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -84,6 +85,39 @@ class ComparisonFastPathTest {
                 }
             }
         }
+    }
+
+    @Test
+    void a_gls_candidate_forecasts_from_several_ends_bit_for_bit_as_a_refit_at_each_end() {
+        // The steering moments of each end come from one pass over the longest prefix, the same sums
+        // in the same order as the refit's own, so every later step is the same arithmetic too.
+        for (Observations series : seededSeries()) {
+            int n = series.size();
+            int[] ends = {n - 4, n - 1, n - 8, n - 5, n - 2};
+            int[] horizons = {4, 1, 6, 2, 3};
+            for (Candidate candidate : StandardCandidates.forSeries(series, 0.05)) {
+                if (!(candidate instanceof GlsTrendCandidate)) {
+                    continue;
+                }
+                List<double[]> fromEnds = candidate.pointForecastsFromEnds(series, ends, horizons);
+                for (int e = 0; e < ends.length; e++) {
+                    assertArrayEquals(candidate.pointForecasts(series.head(ends[e]), horizons[e]), fromEnds.get(e),
+                            candidate.name() + " end " + ends[e]);
+                }
+            }
+        }
+    }
+
+    @Test
+    void a_training_end_too_short_for_gls_fails_as_its_own_refit_does() {
+        // Prais-Winsten GLS on k regressors needs k + 2 observations (one residual degree of freedom
+        // for the transformed regression and one for rho; common practice).
+        Observations series = seededSeries().get(0);
+        Candidate candidate = new GlsTrendCandidate(TrendSpec.linear().withSeasonalDummies(true), 0.05);
+        ModelException refit = assertThrows(ModelException.class, () -> candidate.pointForecasts(series.head(6), 2));
+        ModelException fromEnds = assertThrows(ModelException.class,
+                () -> candidate.pointForecastsFromEnds(series, new int[] {40, 6, 20}, new int[] {2, 2, 2}));
+        assertEquals(refit.getMessage(), fromEnds.getMessage());
     }
 
     @Test
