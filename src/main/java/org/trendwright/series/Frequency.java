@@ -20,9 +20,12 @@ public enum Frequency {
     ANNUAL(1), QUARTERLY(4), MONTHLY(12), WEEKLY(52), DAILY(7);
 
     private final int periodsPerYear;
+    /** Kept, not derived per call: intake asks every cell's period for it. */
+    private final String jsonName;
 
     Frequency(int periodsPerYear) {
         this.periodsPerYear = periodsPerYear;
+        this.jsonName = name().toLowerCase(Locale.ROOT);
     }
 
     /** The season count per cycle handed to the core as {@code periodsPerYear}. */
@@ -32,7 +35,7 @@ public enum Frequency {
 
     /** The lower-case name used in the JSON API and the database, e.g. "quarterly". */
     public String jsonName() {
-        return name().toLowerCase(Locale.ROOT);
+        return jsonName;
     }
 
     /** The frequency with this JSON name, ignoring case. */
