@@ -53,7 +53,7 @@ public final class QuasiDifferencedNormalEquations {
     }
 
     /** The moments of the whole design and response. */
-    public static QuasiDifferencedNormalEquations of(Design design, double[] y) {
+    static QuasiDifferencedNormalEquations of(Design design, double[] y) {
         return ofPrefixes(design, y, new int[] {design.rows()}).get(0);
     }
 
