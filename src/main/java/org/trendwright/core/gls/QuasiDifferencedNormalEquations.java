@@ -21,10 +21,12 @@ import org.trendwright.core.regression.NormalEquations;
  *   d = sum Δx_t Δy_t,   c = sum (Δx_t y_{t-1} + x_{t-1} Δy_t),    r = sum x_{t-1} y_{t-1}
  * </pre>
  * over t = 2..n, plus (1 - rho^2) x_1 x_1' and (1 - rho^2) x_1 y_1 for Prais-Winsten's first row
- * (as {@link Ar1Gls#transform}). The moments are summed once, in n k(2k + 3) multiply-adds, and
- * each step then costs O(k^3) whatever n: the rows are not transformed again at every rho. Written
- * around sigma rather than rho, the terms do not cancel as rho nears 1 (where X*'X* is of order
- * sigma^2 n while x_t x_t' summed is of order n). The moments of every prefix of a design come
+ * (as {@link Ar1Gls#transform}). The moments are summed once, in about 2 n k(k + 3) multiply-adds
+ * (the per-step accumulation they replace took n k(k + 3)/2 at every rho), and each step then
+ * costs O(k^3) whatever n. Written around sigma rather than rho, the terms do not cancel as rho
+ * nears 1: for the constant column, X*'X* is (n - 1) sigma^2, which the sums give as sigma^2 R
+ * directly, where x_t x_t' - 2 rho x_t x_{t-1}' + rho^2 x_{t-1} x_{t-1}' would subtract terms of
+ * order n. The moments of every prefix of a design come
  * from one pass ({@link #ofPrefixes}), bit for bit those {@link #of} gives on the prefix, which lets
  * a model comparison steer the GLS fits at all its training ends from one pass. Immutable.
  */
@@ -68,6 +70,9 @@ public final class QuasiDifferencedNormalEquations {
         if (y.length != design.rows()) {
             throw new IllegalArgumentException("The design has " + design.rows() + " rows but y has " + y.length
                     + " values.");
+        }
+        if (ends.length == 0) {
+            return List.of();
         }
         int longest = Arrays.stream(ends).max().orElse(0);
         if (Arrays.stream(ends).anyMatch(end -> end < 1) || longest > design.rows()) {

@@ -79,7 +79,7 @@ class QuasiDifferencedNormalEquationsTest {
     }
 
     @Test
-    void prefixes_longer_than_the_design_or_empty_are_refused() {
+    void prefixes_longer_than_the_design_are_refused_and_no_ends_give_no_moments() {
         Design design = quarterlyTrend(20);
         double[] y = new double[20];
         IllegalArgumentException tooLong = assertThrows(IllegalArgumentException.class,
@@ -87,6 +87,7 @@ class QuasiDifferencedNormalEquationsTest {
         assertTrue(tooLong.getMessage().contains("1 to 20 rows"), tooLong.getMessage());
         assertThrows(IllegalArgumentException.class,
                 () -> QuasiDifferencedNormalEquations.ofPrefixes(design, new double[19], new int[] {10}));
+        assertTrue(QuasiDifferencedNormalEquations.ofPrefixes(design, y, new int[0]).isEmpty());
     }
 
     private static Design quarterlyTrend(int n) {
