@@ -91,7 +91,10 @@ public final class JsonIntake {
         if (!value.isNumber()) {
             throw new IntakeException(Reason.INVALID_VALUE, where, "must be a number or null, got " + value + ".");
         }
-        return ValueCell.finite(value.doubleValue(), value.asText(), where);
+        double number = value.doubleValue();
+        // The node's text only for a refusal: writing a double out costs more than reading it,
+        // and this runs once per value of every posted series.
+        return Double.isFinite(number) ? number : ValueCell.finite(number, value.asText(), where);
     }
 
     private static Optional<String> text(JsonNode node, String prefix, String field, boolean required) {
