@@ -27,6 +27,7 @@ import org.trendwright.store.BriefRepository;
 import org.trendwright.store.FitResultRepository;
 import org.trendwright.store.JobRepository;
 import org.trendwright.store.MemberRepository;
+import org.trendwright.store.RecentTokenUses;
 import org.trendwright.store.TokenRepository;
 import org.trendwright.team.SetupCode;
 import org.trendwright.team.TeamSettings;
@@ -170,7 +171,9 @@ public final class TrendwrightApp implements AutoCloseable {
      * The team features' parts.
      */
     private static HttpApi.Team team(Database database, Clock clock, TeamSettings settings) {
-        return new HttpApi.Team(new MemberRepository(database, clock), new TokenRepository(database, clock),
+        RecentTokenUses recentTokenUses = new RecentTokenUses();
+        return new HttpApi.Team(new MemberRepository(database, clock, recentTokenUses),
+                new TokenRepository(database, clock, recentTokenUses),
                 new BriefRepository(database, clock), new AuditRepository(database, clock), settings,
                 SetupCode.of(settings.setupCode()), clock);
     }

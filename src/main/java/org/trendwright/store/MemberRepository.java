@@ -33,10 +33,13 @@ public final class MemberRepository {
 
     private final Jdbc jdbc;
     private final Clock clock;
+    private final RecentTokenUses recentTokenUses;
 
-    public MemberRepository(Database database, Clock clock) {
+    /** {@code recentTokenUses} is shared with the {@link TokenRepository} of the same instance. */
+    public MemberRepository(Database database, Clock clock, RecentTokenUses recentTokenUses) {
         this.jdbc = new Jdbc(database.dataSource());
         this.clock = clock;
+        this.recentTokenUses = recentTokenUses;
     }
 
     public boolean isEmpty() {
@@ -119,7 +122,7 @@ public final class MemberRepository {
 
     /** Changes the role and/or password hash (null keeps it); 409 when it would leave no admin. */
     public Member update(long id, Role role, String passwordHash) {
-        return jdbc.transaction("change a member", c -> {
+        Member changed = jdbc.transaction("change a member", c -> {
             Member member = byId(c, id);
             if (role != null && role != Role.ADMIN) {
                 refuseLastAdmin(c, member, "demote");
@@ -134,6 +137,8 @@ public final class MemberRepository {
             }
             return byId(c, id);
         });
+        recentTokenUses.forgetAll();
+        return changed;
     }
 
     /** Removes a member with their sessions and tokens; 409 for the last admin. */
@@ -145,6 +150,7 @@ public final class MemberRepository {
                 return s.executeUpdate();
             }
         });
+        recentTokenUses.forgetAll();
     }
 
     private static void refuseLastAdmin(Connection c, Member member, String verb) throws SQLException {

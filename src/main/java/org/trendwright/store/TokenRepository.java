@@ -22,10 +22,13 @@ public final class TokenRepository {
 
     private final Jdbc jdbc;
     private final Clock clock;
+    private final RecentTokenUses recent;
 
-    public TokenRepository(Database database, Clock clock) {
+    /** {@code recent} is shared with the {@link MemberRepository} of the same instance. */
+    public TokenRepository(Database database, Clock clock, RecentTokenUses recent) {
         this.jdbc = new Jdbc(database.dataSource());
         this.clock = clock;
+        this.recent = recent;
     }
 
     public ApiToken create(long memberId, String name, Scope scope, String tokenDigest) {
@@ -70,9 +73,17 @@ public final class TokenRepository {
      */
     static final long LAST_USE_RESOLUTION_MILLIS = 60_000;
 
-    /** The member and scope of a live token with this digest, marking it used now (to the minute). */
+    /**
+     * The member and scope of a live token with this digest, marking it used now (to the minute).
+     * A token found live in the last second is not looked up again ({@link RecentTokenUses}).
+     */
     public Optional<Holder> use(String tokenDigest) {
         long now = clock.millis();
+        Optional<Holder> recentHolder = recent.recent(tokenDigest, now);
+        if (recentHolder.isPresent()) {
+            return recentHolder;
+        }
+        long lookupStart = recent.lookupStarts();
         Optional<Use> found = jdbc.read("check a token", c -> {
             try (PreparedStatement s = c.prepareStatement("SELECT m.id, m.username, m.role, m.created_at, t.scope, t.id"
                     + " AS token_id, t.last_used_at FROM api_token t JOIN member m ON m.id = t.member_id"
@@ -90,6 +101,7 @@ public final class TokenRepository {
             }
         });
         found.filter(Use::stale).ifPresent(u -> markUsed(u.holder().tokenId(), now));
+        found.ifPresent(u -> recent.remember(tokenDigest, u.holder(), now, lookupStart));
         return found.map(Use::holder);
     }
 
@@ -121,6 +133,7 @@ public final class TokenRepository {
                 return null;
             }
         });
+        recent.forgetAll();
     }
 
     private static ApiToken token(ResultSet rs) throws SQLException {
