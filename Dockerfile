@@ -32,5 +32,6 @@ USER trendwright
 WORKDIR /var/lib/trendwright
 HEALTHCHECK --interval=30s --timeout=5s --start-period=20s --retries=3 \
   CMD ["java", "-cp", "/opt/trendwright/trendwright.jar", "org.trendwright.app.HealthProbe"]
-# exec form: the JVM is PID 1 and gets SIGTERM, so the shutdown hook stops gracefully.
-ENTRYPOINT ["java", "-jar", "/opt/trendwright/trendwright.jar"]
+# exec form: the JVM is PID 1 and gets SIGTERM, so the shutdown hook stops gracefully. The JVM
+# options are README's for a team server (throughput collector, huge pages for the heap).
+ENTRYPOINT ["java", "-XX:+UseParallelGC", "-XX:+UseTransparentHugePages", "-jar", "/opt/trendwright/trendwright.jar"]

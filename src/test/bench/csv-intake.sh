@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # CSV intake benchmark: generates a long-format CSV (series,period,value) of SERIES series x PERIODS
 # monthly periods (seeded random walks; 1,000 x 1,000 = 1,000,000 rows, about 24 MB), starts the
-# packed jar with -Xmx256m and a GC log, raises the body limit with its documented setting
+# packed jar with -Xmx256m, a GC log and the JVM options README recommends (JVM_OPTIONS, as in
+# fit-load.sh), raises the body limit with its documented setting
 # (--max-body-bytes, default 10 MB, still enforced while the body streams), creates the first admin
 # and a token, and RUNS times: starts a fresh server and store, posts the file twice (the first
 # upload on a new JVM, then a second once the JIT has compiled the intake code) and reports the wall
@@ -40,7 +41,7 @@ start_server() {
   if [ -n "$database_url" ]; then
     store=(--database-url="$database_url" --database-schema="bench_$1_$$") # Flyway creates the schema
   fi
-  TRENDWRIGHT_SETUP_CODE=bench-setup-code-$$ java -Xmx256m -Xlog:gc:file="$work/gc-$1.log" -jar "$jar" --port="$port" --data-dir="$data" \
+  TRENDWRIGHT_SETUP_CODE=bench-setup-code-$$ java -Xmx256m ${JVM_OPTIONS--XX:+UseParallelGC -XX:+UseTransparentHugePages} -Xlog:gc:file="$work/gc-$1.log" -jar "$jar" --port="$port" --data-dir="$data" \
     --demo-data=false --job-workers=0 --max-body-bytes=$((64 * 1024 * 1024)) "${store[@]}" > "$work/server-$1.log" 2>&1 &
   pid=$!
   for _ in $(seq 1 120); do

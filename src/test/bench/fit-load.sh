@@ -4,7 +4,9 @@
 # token, warms up, then runs wrk with src/test/bench/fit-120.lua and reports the server's CPU time
 # per request (process user+system time from /proc over the measured run) beside wrk's figures.
 # Usage: src/test/bench/fit-load.sh [port=7300] [seconds=60] [connections=64] [warm-up seconds=15]
-# Extra JVM options: JAVA_OPTS (e.g. -XX:StartFlightRecording=...). SERVER_LOG=<file> keeps the
+# The server runs with -Xmx512m and the JVM options README recommends for a team server
+# (JVM_OPTIONS, default "-XX:+UseParallelGC -XX:+UseTransparentHugePages"; JVM_OPTIONS= runs the
+# JVM's defaults). Extra JVM options: JAVA_OPTS (e.g. -XX:StartFlightRecording=...). SERVER_LOG=<file> keeps the
 # server's log (one line per request with its ms, for the server-side latency). Loopback only.
 set -euo pipefail
 port=${1:-7300}
@@ -14,7 +16,7 @@ warmup=${4:-15}
 here=$(cd "$(dirname "$0")" && pwd)
 data=$(mktemp -d /tmp/tw-fit-load.XXXXXX)
 code="fit-load-setup-$RANDOM$RANDOM"
-TRENDWRIGHT_SETUP_CODE=$code java -Xmx512m ${JAVA_OPTS:-} -jar "$here/../../../target/trendwright.jar" \
+TRENDWRIGHT_SETUP_CODE=$code java -Xmx512m ${JVM_OPTIONS--XX:+UseParallelGC -XX:+UseTransparentHugePages} ${JAVA_OPTS:-} -jar "$here/../../../target/trendwright.jar" \
     --port="$port" --data-dir="$data" --no-demo-data > "$data/server.log" 2>&1 &
 server=$!
 trap 'kill $server 2>/dev/null || true; wait $server 2>/dev/null || true; if [ -n "${SERVER_LOG:-}" ]; then cp "$data/server.log" "$SERVER_LOG"; fi; rm -rf "$data"' EXIT
