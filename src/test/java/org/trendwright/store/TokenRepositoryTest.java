@@ -6,10 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.SQLException;
-import java.time.Clock;
+import java.time.Duration;
 import java.time.Instant;
-import java.time.ZoneId;
-import java.time.ZoneOffset;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -19,6 +17,7 @@ import org.trendwright.team.Member;
 import org.trendwright.team.Role;
 import org.trendwright.team.Scope;
 import org.trendwright.testing.FreshStore;
+import org.trendwright.testing.ManualClock;
 
 /**
  * Token lookups and their one-second reuse ({@link RecentTokenUses}) on SQLite and PostgreSQL:
@@ -71,9 +70,9 @@ class TokenRepositoryTest {
         assertEquals(Role.EDITOR, tokens.use(DIGEST).orElseThrow().member().role());
         behindTheRepositorysBack("UPDATE api_token SET revoked_at = 1 WHERE id = ?", tokenId);
 
-        clock.advanceMillis(RecentTokenUses.REUSE_MILLIS - 1);
+        clock.advance(Duration.ofMillis(RecentTokenUses.REUSE_MILLIS - 1));
         assertTrue(tokens.use(DIGEST).isPresent(), "still reused within the period");
-        clock.advanceMillis(1);
+        clock.advance(Duration.ofMillis(1));
         assertTrue(tokens.use(DIGEST).isEmpty(), "looked up again once the period is over");
     }
 
@@ -119,34 +118,6 @@ class TokenRepositoryTest {
         try (Connection c = database.dataSource().getConnection(); PreparedStatement s = c.prepareStatement(sql)) {
             s.setLong(1, id);
             assertEquals(1, s.executeUpdate());
-        }
-    }
-
-    /** A clock the test moves by hand. */
-    private static final class ManualClock extends Clock {
-        private Instant now;
-
-        ManualClock(Instant start) {
-            this.now = start;
-        }
-
-        void advanceMillis(long millis) {
-            now = now.plusMillis(millis);
-        }
-
-        @Override
-        public ZoneId getZone() {
-            return ZoneOffset.UTC;
-        }
-
-        @Override
-        public Clock withZone(ZoneId zone) {
-            return this;
-        }
-
-        @Override
-        public Instant instant() {
-            return now;
         }
     }
 }

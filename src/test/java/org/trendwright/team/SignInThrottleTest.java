@@ -4,40 +4,15 @@ import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
-import java.time.Clock;
 import java.time.Duration;
 import java.time.Instant;
-import java.time.ZoneOffset;
 import org.junit.jupiter.api.Test;
+import org.trendwright.testing.ManualClock;
 
 /** Slow-down and lock-out of failed sign-ins, on a clock the test moves. */
 class SignInThrottleTest {
 
-    /** A clock that stands still until moved. */
-    private static final class ManualClock extends Clock {
-        private Instant now = Instant.parse("2026-01-01T00:00:00Z");
-
-        @Override
-        public java.time.ZoneId getZone() {
-            return ZoneOffset.UTC;
-        }
-
-        @Override
-        public Clock withZone(java.time.ZoneId zone) {
-            return this;
-        }
-
-        @Override
-        public Instant instant() {
-            return now;
-        }
-
-        void advance(Duration by) {
-            now = now.plus(by);
-        }
-    }
-
-    private final ManualClock clock = new ManualClock();
+    private final ManualClock clock = new ManualClock(Instant.parse("2026-01-01T00:00:00Z"));
     private final SignInThrottle throttle = new SignInThrottle(new TeamSettings(null, Duration.ofHours(12), 3,
             Duration.ofSeconds(1), 6, Duration.ofMinutes(15)), clock);
 
