@@ -26,6 +26,7 @@ import org.trendwright.series.SeriesVersion;
 import org.trendwright.series.StoredUpload;
 import org.trendwright.series.VersionConflictException;
 import org.trendwright.testing.FreshStore;
+import org.trendwright.testing.OpenedStore;
 
 /** The repository on SQLite and PostgreSQL, each test on a fresh store with real migrations. */
 @ParameterizedClass
@@ -35,7 +36,7 @@ class SeriesRepositoryTest {
     private static final Clock CLOCK = Clock.fixed(Instant.parse("2025-03-01T12:00:00Z"), ZoneOffset.UTC);
 
     private final FreshStore.Kind kind;
-    private FreshStore store;
+    private OpenedStore opened;
     private Database database;
     private SeriesRepository repository;
 
@@ -45,18 +46,15 @@ class SeriesRepositoryTest {
 
     @BeforeEach
     void open() {
-        store = FreshStore.create(kind);
-        database = store.open();
+        opened = OpenedStore.of(kind);
+        database = opened.database();
         repository = new SeriesRepository(database, CLOCK);
     }
 
     @AfterEach
     void close() {
-        if (database != null) { // null when the PostgreSQL variant was skipped
-            database.close();
-        }
-        if (store != null) {
-            store.close();
+        if (opened != null) { // null when the PostgreSQL variant was skipped
+            opened.close();
         }
     }
 

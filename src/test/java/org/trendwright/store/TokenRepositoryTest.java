@@ -17,6 +17,7 @@ import org.trendwright.team.Member;
 import org.trendwright.team.Role;
 import org.trendwright.team.Scope;
 import org.trendwright.testing.FreshStore;
+import org.trendwright.testing.OpenedStore;
 import org.trendwright.testing.ManualClock;
 
 /**
@@ -32,7 +33,7 @@ class TokenRepositoryTest {
 
     private final FreshStore.Kind kind;
     private final ManualClock clock = new ManualClock(Instant.parse("2026-03-02T09:00:00Z"));
-    private FreshStore store;
+    private OpenedStore opened;
     private Database database;
     private MemberRepository members;
     private TokenRepository tokens;
@@ -45,8 +46,8 @@ class TokenRepositoryTest {
 
     @BeforeEach
     void open() {
-        store = FreshStore.create(kind);
-        database = store.open();
+        opened = OpenedStore.of(kind);
+        database = opened.database();
         RecentTokenUses recent = new RecentTokenUses();
         members = new MemberRepository(database, clock, recent);
         tokens = new TokenRepository(database, clock, recent);
@@ -57,11 +58,8 @@ class TokenRepositoryTest {
 
     @AfterEach
     void close() {
-        if (database != null) { // null when the PostgreSQL variant was skipped
-            database.close();
-        }
-        if (store != null) {
-            store.close();
+        if (opened != null) { // null when the PostgreSQL variant was skipped
+            opened.close();
         }
     }
 
